@@ -1,0 +1,108 @@
+package org.chillwright.account;
+
+import static org.springframework.http.HttpMethod.GET;
+import static org.springframework.http.HttpMethod.POST;
+
+import org.chillwright.web.ProblemWriter;
+import org.chillwright.web.RequestLogFilter;
+import org.springframework.beans.factory.annotation.Value;
+import org.springframework.context.annotation.Bean;
+import org.springframework.context.annotation.Configuration;
+import org.springframework.core.annotation.Order;
+import org.springframework.http.HttpStatus;
+import org.springframework.security.config.Customizer;
+import org.springframework.security.config.annotation.method.configuration.EnableMethodSecurity;
+import org.springframework.security.config.annotation.web.builders.HttpSecurity;
+import org.springframework.security.config.annotation.web.configurers.AbstractHttpConfigurer;
+import org.springframework.security.config.http.SessionCreationPolicy;
+import org.springframework.security.crypto.factory.PasswordEncoderFactories;
+import org.springframework.security.crypto.password.PasswordEncoder;
+import org.springframework.security.web.SecurityFilterChain;
+import org.springframework.security.web.access.ExceptionTranslationFilter;
+
+/**
+ * Two filter chains over the same accounts: the API is stateless HTTP Basic without CSRF (it takes
+ * no cookies, so there is nothing to forge); pages use form login with CSRF protection.
+ * With {@code chillwright.access.open-reads} (the embedded default) computations and catalog reads
+ * are open so a newcomer can try the tool at once; writes always need an account with a role,
+ * checked again per method with {@code @PreAuthorize}.
+ */
+@Configuration
+@EnableMethodSecurity
+class SecurityConfig {
+
+    /** API routes that only compute: no state changes, so open on the embedded default. */
+    static final String[] API_COMPUTATIONS = {
+        "/api/v1/derive", "/api/v1/operating-point", "/api/v1/rankings", "/api/v1/cascade/**",
+        "/api/v1/cooldown", "/api/v1/generator/**"
+    };
+    /** API reads open on the embedded default. */
+    static final String[] API_OPEN_READS = {"/api/v1/modules", "/api/v1/modules/**", "/api/v1/dew-point"};
+    /** Page form posts that only compute (solve a case, evaluate a generator). */
+    static final String[] PAGE_COMPUTATIONS = {"/cases/**", "/harvest/**"};
+    static final String[] ALWAYS_OPEN = {
+        "/login", "/error", "/css/**", "/js/**", "/img/**", "/webjars/**", "/favicon.ico", "/actuator/health/**"
+    };
+    static final String[] API_DOCS = {"/v3/api-docs/**", "/api-docs", "/swagger-ui/**", "/swagger-ui.html"};
+
+    private final boolean openReads;
+
+    SecurityConfig(@Value("${chillwright.access.open-reads:false}") boolean openReads) {
+        this.openReads = openReads;
+    }
+
+    @Bean
+    PasswordEncoder passwordEncoder() {
+        return PasswordEncoderFactories.createDelegatingPasswordEncoder(); // bcrypt by default
+    }
+
+    @Bean
+    @Order(1)
+    SecurityFilterChain apiChain(HttpSecurity http, ProblemWriter problems) throws Exception {
+        http.securityMatcher("/api/**")
+                .addFilterBefore(new RequestLogFilter(), ExceptionTranslationFilter.class)
+                .csrf(AbstractHttpConfigurer::disable)
+                .sessionManagement(s -> s.sessionCreationPolicy(SessionCreationPolicy.STATELESS))
+                .httpBasic(basic -> basic.authenticationEntryPoint((request, response, e) -> problems.write(
+                        response, HttpStatus.UNAUTHORIZED, "Sign-in required",
+                        "This request needs an account: send HTTP Basic credentials.")))
+                .exceptionHandling(e -> e
+                        .authenticationEntryPoint((request, response, ex) -> problems.write(
+                                response, HttpStatus.UNAUTHORIZED, "Sign-in required",
+                                "This request needs an account: send HTTP Basic credentials."))
+                        .accessDeniedHandler((request, response, ex) -> problems.write(
+                                response, HttpStatus.FORBIDDEN, "Not allowed",
+                                "Your account's roles do not allow this request.")))
+                .authorizeHttpRequests(auth -> {
+                    if (openReads) {
+                        auth.requestMatchers(POST, API_COMPUTATIONS).permitAll();
+                        auth.requestMatchers(GET, API_OPEN_READS).permitAll();
+                    }
+                    auth.anyRequest().authenticated();
+                });
+        return http.build();
+    }
+
+    @Bean
+    @Order(2)
+    SecurityFilterChain pageChain(HttpSecurity http) throws Exception {
+        http.addFilterBefore(new RequestLogFilter(), ExceptionTranslationFilter.class)
+                .formLogin(form -> form.loginPage("/login").failureUrl("/login?error").permitAll())
+                .logout(logout -> logout.logoutSuccessUrl("/login?signedOut"))
+                .httpBasic(Customizer.withDefaults())
+                .headers(h -> h.contentSecurityPolicy(csp -> csp.policyDirectives(
+                        "default-src 'self'; img-src 'self' data: blob:; style-src 'self' 'unsafe-inline'; "
+                                + "script-src 'self'; object-src 'none'; frame-ancestors 'none'")))
+                .authorizeHttpRequests(auth -> {
+                    auth.requestMatchers(ALWAYS_OPEN).permitAll();
+                    auth.requestMatchers("/admin/**").hasRole(Role.ADMIN.name());
+                    if (openReads) {
+                        auth.requestMatchers(API_DOCS).permitAll();
+                        auth.requestMatchers(POST, PAGE_COMPUTATIONS).permitAll();
+                        auth.requestMatchers(GET, "/**").permitAll();
+                    }
+                    auth.anyRequest().authenticated();
+                });
+        return http.build();
+    }
+}

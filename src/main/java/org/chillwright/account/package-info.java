@@ -1,0 +1,2 @@
+/** Accounts, roles and the security configuration: who may read, compute and change what. */
+package org.chillwright.account;

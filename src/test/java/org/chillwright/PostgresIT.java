@@ -1,0 +1,44 @@
+package org.chillwright;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.util.EnumSet;
+import org.chillwright.account.AccountService;
+import org.chillwright.account.Role;
+import org.junit.jupiter.api.Test;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.jdbc.core.JdbcTemplate;
+
+/** The same Flyway migrations run on the real PostgreSQL server that .ci/run starts, and data round-trips. */
+@SpringBootTest
+@PostgresDatabase
+class PostgresIT {
+
+    @Autowired
+    JdbcTemplate jdbc;
+    @Autowired
+    AccountService accounts;
+
+    @Test
+    void runsOnPostgresql() {
+        assertThat(jdbc.queryForObject("SELECT version()", String.class)).startsWith("PostgreSQL");
+    }
+
+    @Test
+    void everyMigrationApplied() {
+        var failed = jdbc.queryForObject("SELECT count(*) FROM flyway_schema_history WHERE NOT success", Integer.class);
+        var applied = jdbc.queryForObject("SELECT count(*) FROM flyway_schema_history WHERE success", Integer.class);
+        assertThat(failed).isZero();
+        assertThat(applied).isPositive();
+    }
+
+    @Test
+    void accountRoundTrips() {
+        String name = "pg-user-" + System.nanoTime();
+        accounts.create(name, "pg-user-password", EnumSet.of(Role.PURCHASING, Role.APPROVER));
+        var loaded = accounts.loadUserByUsername(name);
+        assertThat(loaded.getAuthorities()).extracting(Object::toString)
+                .containsExactlyInAnyOrder("ROLE_PURCHASING", "ROLE_APPROVER");
+    }
+}
