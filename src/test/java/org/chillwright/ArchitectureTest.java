@@ -28,6 +28,15 @@ class ArchitectureTest {
     }
 
     @Test
+    void physicsKnowsNothingOfTheApplication() {
+        classes().that().resideInAPackage("org.chillwright.physics..")
+                .should().onlyDependOnClassesThat().resideInAnyPackage(
+                        "org.chillwright.physics..", "java..", "org.apache.commons.math3..")
+                .because("the physics engine is pure Java and Commons Math: no Spring, JPA or web")
+                .check(production);
+    }
+
+    @Test
     void repositoriesStayInsideTheirFeature() {
         // package-private repositories cannot be called from another feature's package
         classes().that().areInterfaces().and().areAssignableTo(Repository.class)

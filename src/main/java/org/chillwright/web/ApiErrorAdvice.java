@@ -3,6 +3,7 @@ package org.chillwright.web;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Collectors;
+import org.chillwright.physics.InvalidQuantityException;
 import org.springframework.dao.OptimisticLockingFailureException;
 import org.springframework.http.HttpHeaders;
 import org.springframework.http.HttpStatus;
@@ -85,6 +86,11 @@ public class ApiErrorAdvice extends ResponseEntityExceptionHandler {
     protected ResponseEntity<Object> handleMissingServletRequestParameter(MissingServletRequestParameterException ex,
             HttpHeaders headers, HttpStatusCode status, WebRequest request) {
         return badRequest(List.of(new FieldProblem(ex.getParameterName(), "is required")));
+    }
+
+    @ExceptionHandler(InvalidQuantityException.class)
+    ResponseEntity<Object> invalidQuantity(InvalidQuantityException ex) {
+        return badRequest(List.of(new FieldProblem(JsonFieldNames.of(ex.field()), "is out of range: " + ex.getMessage())));
     }
 
     @ExceptionHandler(InvalidRequestException.class)

@@ -10,4 +10,10 @@ class HomeController {
     String home() {
         return "home";
     }
+
+    /** The equations used and their published sources. */
+    @GetMapping("/method")
+    String method() {
+        return "method";
+    }
 }

@@ -41,6 +41,22 @@ class AccessRulesTest {
     }
 
     @Test
+    void methodPageNamesItsSources() throws Exception {
+        mvc.perform(get("/method")).andExpect(status().isOk())
+                .andExpect(content().string(org.hamcrest.Matchers.allOf(
+                        org.hamcrest.Matchers.containsString("Alduchov"),
+                        org.hamcrest.Matchers.containsString("Ioffe"),
+                        org.hamcrest.Matchers.containsString("I_COPmax"))));
+    }
+
+    @Test
+    void computationsAreOpenOnTheEmbeddedDefault() throws Exception {
+        mvc.perform(post("/api/v1/derive").contentType(MediaType.APPLICATION_JSON)
+                        .content("{\"module\":{\"seebeckVPerK\":0.04,\"resistanceOhm\":2.4,\"conductanceWPerK\":0.25}}"))
+                .andExpect(status().isOk());
+    }
+
+    @Test
     void adminPagesRedirectAnonymousVisitorsToLogin() throws Exception {
         mvc.perform(get("/admin/users").accept(MediaType.TEXT_HTML))
                 .andExpect(status().isFound())

@@ -1,0 +1,21 @@
+package org.chillwright.harvest.api;
+
+import jakarta.validation.Valid;
+import jakarta.validation.constraints.DecimalMax;
+import jakarta.validation.constraints.DecimalMin;
+import jakarta.validation.constraints.NotNull;
+import jakarta.validation.constraints.PositiveOrZero;
+import org.chillwright.catalog.ModuleInput;
+
+/**
+ * {@code POST /api/v1/generator/operating-point}: a module between a hot source and a cold sink through
+ * heat-exchanger resistances; without {@code loadOhm}, the load that gives the most power.
+ */
+public record GeneratorRequest(
+        @NotNull @Valid ModuleInput module,
+        @NotNull @DecimalMin(value = "-273.15", inclusive = false) @DecimalMax("400") Double hotSourceC,
+        @NotNull @DecimalMin(value = "-273.15", inclusive = false) @DecimalMax("400") Double coldSinkC,
+        @NotNull @PositiveOrZero Double hotResistanceKPerW,
+        @NotNull @PositiveOrZero Double coldResistanceKPerW,
+        @PositiveOrZero Double loadOhm) {
+}

@@ -1,0 +1,2 @@
+/** The same modules evaluated as generators: heat harvesting between a hot source and a cold sink. */
+package org.chillwright.harvest;
