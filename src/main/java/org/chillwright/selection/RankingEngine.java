@@ -1,0 +1,286 @@
+package org.chillwright.selection;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.stream.IntStream;
+import org.chillwright.physics.CoolingCase;
+import org.chillwright.physics.DriveLimits;
+import org.chillwright.physics.Infeasible;
+import org.chillwright.physics.ModuleArray;
+import org.chillwright.physics.ModuleParameters;
+import org.chillwright.physics.OperatingPoint;
+import org.chillwright.physics.OperatingPointSolver;
+import org.chillwright.physics.Solved;
+
+/**
+ * Solves every module in every series × parallel split against one case and ranks the designs.
+ *
+ * <p>Rank first, detail later: a first pass runs the allocation-free lower-root solve
+ * ({@link OperatingPointSolver#currentForLoadA}) for every design and checks the rated Imax and the
+ * supply on its terminal values; only the designs that are shown (and, for the margin objective, every
+ * feasible one) get the full solve with capacity peak, margin in K and warnings. The two passes use the
+ * same equations, so a design feasible in the first is feasible in the second.
+ */
+public final class RankingEngine {
+
+    private static final String ABOVE_IMAX_FRACTION = "ABOVE_IMAX_FRACTION";
+    private static final String BELOW_MIN_MARGIN = "BELOW_MIN_MARGIN";
+
+    private final OperatingPointSolver solver = new OperatingPointSolver();
+
+    /** Every (series, parallel) split with series × parallel ≤ maxModules, fewest modules first. */
+    static int[][] configurations(int maxModules) {
+        var splits = new ArrayList<int[]>();
+        for (int count = 1; count <= maxModules; count++) {
+            for (int series = 1; series <= count; series++) {
+                if (count % series == 0) {
+                    splits.add(new int[] {series, count / series});
+                }
+            }
+        }
+        return splits.toArray(int[][]::new);
+    }
+
+    public Ranking rank(CandidateTable table, RankingCase rankingCase) {
+        long start = System.nanoTime();
+        CoolingCase c = rankingCase.solverCase();
+        int[][] configs = configurations(rankingCase.maxModules());
+        int n = table.size();
+        int designs = n * configs.length;
+        double coldK = c.coldSideAtLoadK();
+        double hotPathKPerW = c.hotPathKPerW();
+        double ambientK = c.ambientK();
+        double loadW = c.heatLoadW();
+        double supplyV = rankingCase.supplyMaxV();
+        double supplyA = rankingCase.supplyMaxA();
+
+        // pass 1: terminal current, power and fraction of Imax of every design; NaN current = infeasible
+        double[] currentA = new double[designs];
+        double[] powerW = new double[designs];
+        double[] fraction = new double[designs];
+        IntStream.range(0, n).parallel().forEach(i -> {
+            for (int k = 0; k < configs.length; k++) {
+                int series = configs[k][0];
+                int parallel = configs[k][1];
+                int d = i * configs.length + k;
+                double s = table.seebeckVPerK()[i] * series;
+                double r = table.resistanceOhm()[i] * series / parallel;
+                double g = table.conductanceWPerK()[i] * series * parallel;
+                double current = OperatingPointSolver.currentForLoadA(s, r, g, coldK, ambientK, hotPathKPerW, loadW);
+                double imaxA = table.ratedImaxA()[i] * parallel;
+                double hotK = OperatingPointSolver.hotSideK(s, r, g, coldK, ambientK, hotPathKPerW, current);
+                double voltage = s * (hotK - coldK) + current * r;
+                boolean withinLimits = !(current > imaxA) && !(current > supplyA) && !(voltage > supplyV);
+                currentA[d] = withinLimits ? current : Double.NaN;
+                powerW[d] = current * voltage;
+                fraction[d] = current / imaxA;
+            }
+        });
+
+        // feasible designs within the Imax-fraction filter, keyed for sorting
+        double maxFraction = rankingCase.maxFractionOfImax();
+        int[] feasible = new int[designs];
+        int feasibleCount = 0;
+        boolean[] anyFeasible = new boolean[n];
+        boolean[] onlyAboveFraction = new boolean[n];
+        for (int d = 0; d < designs; d++) {
+            if (Double.isNaN(currentA[d])) {
+                continue;
+            }
+            int i = d / configs.length;
+            if (fraction[d] > maxFraction) {
+                onlyAboveFraction[i] = true;
+                continue;
+            }
+            anyFeasible[i] = true;
+            feasible[feasibleCount++] = d;
+        }
+        feasible = Arrays.copyOf(feasible, feasibleCount);
+
+        double[] arrayCost = new double[designs];
+        double[] unitPrice = new double[designs];
+        Arrays.fill(arrayCost, Double.NaN);
+        Arrays.fill(unitPrice, Double.NaN);
+        for (int d : feasible) {
+            int modules = configs[d % configs.length][0] * configs[d % configs.length][1];
+            double price = table.prices().unitPrice(d / configs.length, modules * rankingCase.costQuantity());
+            unitPrice[d] = price;
+            arrayCost[d] = price * modules;
+        }
+
+        Solved[] detailed = new Solved[designs];
+        double[] key = new double[designs];
+        if (rankingCase.objective() == Objective.MARGIN) {
+            for (int d : feasible) {
+                detailed[d] = fullSolve(table, configs, d, rankingCase, c);
+                key[d] = -detailed[d].marginK();
+            }
+        } else {
+            for (int d : feasible) {
+                key[d] = switch (rankingCase.objective()) {
+                    case COP -> -copOf(loadW, powerW[d]);
+                    case POWER -> powerW[d];
+                    case COST -> Double.isNaN(arrayCost[d]) ? Double.POSITIVE_INFINITY : arrayCost[d];
+                    case MARGIN -> throw new IllegalStateException("handled above");
+                };
+            }
+        }
+        long[] order = sortedByKey(feasible, key);
+        boolean[] pareto = paretoFront(feasible, arrayCost, loadW, powerW);
+
+        var candidates = new ArrayList<Ranking.Candidate>();
+        var shown = new boolean[n];
+        var belowMargin = new boolean[n];
+        for (long packed : order) {
+            if (candidates.size() >= rankingCase.limit()) {
+                break;
+            }
+            int d = (int) packed;
+            Solved point = detailed[d] != null ? detailed[d] : fullSolve(table, configs, d, rankingCase, c);
+            int i = d / configs.length;
+            if (point.marginK() < rankingCase.minMarginK()) {
+                belowMargin[i] = true;
+                continue;
+            }
+            shown[i] = true;
+            double requiredSink = rankingCase.sizesTheSink() ? rankingCase.sinkRiseK() / point.heatRejectedW()
+                    : Double.NaN;
+            candidates.add(new Ranking.Candidate(candidates.size() + 1, table.moduleIds()[i], configs[d % configs.length][0],
+                    configs[d % configs.length][1], point, unitPrice[d], arrayCost[d], pareto[d], requiredSink));
+        }
+
+        var rejections = new ArrayList<Ranking.Rejection>();
+        for (int i = 0; i < n; i++) {
+            if (anyFeasible[i]) {
+                if (!shown[i] && belowMargin[i]) {
+                    rejections.add(new Ranking.Rejection(table.moduleIds()[i], BELOW_MIN_MARGIN,
+                            "every design shown with this module leaves less than the required "
+                                    + rankingCase.minMarginK() + " K of margin"));
+                }
+                continue;
+            }
+            if (onlyAboveFraction[i]) {
+                rejections.add(new Ranking.Rejection(table.moduleIds()[i], ABOVE_IMAX_FRACTION, String.format(
+                        "every design that works needs more than %.0f %% of the rated Imax", 100 * maxFraction)));
+                continue;
+            }
+            rejections.add(reasonFor(table, configs, i, rankingCase, c));
+        }
+        return new Ranking(candidates, rejections, feasibleCount, designs, System.nanoTime() - start);
+    }
+
+    private static double copOf(double loadW, double powerW) {
+        return powerW > 0 ? loadW / powerW : Double.POSITIVE_INFINITY;
+    }
+
+    private Solved fullSolve(CandidateTable table, int[][] configs, int d, RankingCase rankingCase, CoolingCase c) {
+        int i = d / configs.length;
+        OperatingPoint point = solve(table, i, configs[d % configs.length], rankingCase, c);
+        if (point instanceof Solved solved) {
+            return solved;
+        }
+        // pass 1 found this design feasible with the same equations; a disagreement is a bug, not input
+        throw new IllegalStateException("module " + table.moduleIds()[i] + " in " + configs[d % configs.length][0]
+                + "x" + configs[d % configs.length][1] + " passed the first pass but the full solve says "
+                + ((Infeasible) point).detail());
+    }
+
+    private OperatingPoint solve(CandidateTable table, int i, int[] config, RankingCase rankingCase, CoolingCase c) {
+        var module = new ModuleParameters(table.seebeckVPerK()[i], table.resistanceOhm()[i],
+                table.conductanceWPerK()[i]);
+        var limits = new DriveLimits(table.ratedImaxA()[i] * config[1], rankingCase.supplyMaxV(),
+                rankingCase.supplyMaxA(), table.maxHotSideK()[i]);
+        return solver.solve(new ModuleArray(module, config[0], config[1]), c, limits);
+    }
+
+    /** The reason of the largest design tried: if even that cannot do it, the smaller ones cannot either. */
+    private Ranking.Rejection reasonFor(CandidateTable table, int[][] configs, int i, RankingCase rankingCase,
+                                        CoolingCase c) {
+        int[] largest = configs[configs.length - 1];
+        OperatingPoint point = solve(table, i, largest, rankingCase, c);
+        if (point instanceof Infeasible infeasible) {
+            String prefix = configs.length == 1 ? "" : "even " + largest[0] + " in series × " + largest[1]
+                    + " in parallel: ";
+            return new Ranking.Rejection(table.moduleIds()[i], infeasible.reason().name(), prefix + infeasible.detail());
+        }
+        // the largest design works but needs more than a smaller one's limits allow (e.g. supply volts)
+        for (int[] config : configs) {
+            if (solve(table, i, config, rankingCase, c) instanceof Infeasible infeasible) {
+                return new Ranking.Rejection(table.moduleIds()[i], infeasible.reason().name(), infeasible.detail());
+            }
+        }
+        throw new IllegalStateException("module " + table.moduleIds()[i] + " has no infeasible design to explain");
+    }
+
+    /**
+     * Feasible designs in ascending key order. Each is packed into a long: a sortable form of the key
+     * (as a float, ample to order designs) above the design index, so one primitive sort orders them.
+     */
+    private static long[] sortedByKey(int[] designs, double[] key) {
+        long[] packed = new long[designs.length];
+        for (int j = 0; j < designs.length; j++) {
+            int d = designs[j];
+            packed[j] = ((long) sortableBits((float) key[d]) << 32) | (d & 0xffffffffL);
+        }
+        Arrays.sort(packed);
+        // designs whose keys round to the same float: order them by the exact key (runs are short)
+        for (int start = 0; start < packed.length; ) {
+            int end = start + 1;
+            while (end < packed.length && (packed[end] >>> 32) == (packed[start] >>> 32)) {
+                end++;
+            }
+            for (int j = start + 1; j < end; j++) {
+                long moving = packed[j];
+                int m = j - 1;
+                while (m >= start && key[(int) packed[m]] > key[(int) moving]) {
+                    packed[m + 1] = packed[m];
+                    m--;
+                }
+                packed[m + 1] = moving;
+            }
+            start = end;
+        }
+        return packed;
+    }
+
+    /** Float bits flipped so that signed integer order is numeric order (negatives reversed). */
+    private static int sortableBits(float value) {
+        int bits = Float.floatToIntBits(value);
+        return bits < 0 ? bits ^ 0x7fffffff : bits;
+    }
+
+    /** Designs on the COP–cost Pareto front: sweep by rising cost, keep those that beat every cheaper COP. */
+    private static boolean[] paretoFront(int[] feasible, double[] arrayCost, double loadW, double[] powerW) {
+        boolean[] front = new boolean[arrayCost.length];
+        int priced = 0;
+        int[] withPrice = new int[feasible.length];
+        for (int d : feasible) {
+            if (Double.isFinite(arrayCost[d])) {
+                withPrice[priced++] = d;
+            }
+        }
+        long[] byCost = sortedByKey(Arrays.copyOf(withPrice, priced), arrayCost);
+        double bestCop = Double.NEGATIVE_INFINITY; // best COP among strictly cheaper designs
+        int j = 0;
+        while (j < byCost.length) {
+            // designs of equal cost form a group: only its best COP can be on the front
+            double cost = arrayCost[(int) byCost[j]];
+            int groupBest = -1;
+            double groupCop = Double.NEGATIVE_INFINITY;
+            for (; j < byCost.length && arrayCost[(int) byCost[j]] == cost; j++) {
+                int d = (int) byCost[j];
+                double cop = copOf(loadW, powerW[d]);
+                if (cop > groupCop) {
+                    groupCop = cop;
+                    groupBest = d;
+                }
+            }
+            if (groupCop > bestCop) {
+                front[groupBest] = true;
+                bestCop = groupCop;
+            }
+        }
+        return front;
+    }
+}
