@@ -69,4 +69,19 @@ class OperatingPointProperties {
             assertThat(fastA).isNaN();
         }
     }
+
+    @Property(tries = 300)
+    void solvedPointsHaveNonNegativeMargins(@ForAll @Scale(6) @DoubleRange(min = 0.01, max = 0.1) double s,
+                                            @ForAll @Scale(6) @DoubleRange(min = 0.5, max = 5) double r,
+                                            @ForAll @Scale(6) @DoubleRange(min = 0.1, max = 1) double k,
+                                            @ForAll @Scale(6) @DoubleRange(min = 250, max = 300) double objectK,
+                                            @ForAll @Scale(6) @DoubleRange(min = 0.1, max = 30) double loadW,
+                                            @ForAll @Scale(6) @DoubleRange(min = 0.5, max = 20) double imaxA) {
+        // A feasible point within the current limit leaves capacity and temperature margin of at least zero.
+        var c = new CoolingCase(objectK, 298.15, loadW, 0.3, 0.1, 0.05);
+        if (solver.solve(new ModuleParameters(s, r, k), c, DriveLimits.ofRatedImaxA(imaxA)) instanceof Solved p) {
+            assertThat(p.maxHeatLoadW()).isGreaterThanOrEqualTo(loadW - 1e-6);
+            assertThat(p.marginK()).isGreaterThanOrEqualTo(-1e-6);
+        }
+    }
 }

@@ -4,7 +4,11 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
+import java.util.stream.Stream;
+
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
 
 class OperatingPointSolverTest {
 
@@ -83,10 +87,15 @@ class OperatingPointSolverTest {
         assertThat(point.maxHeatLoadW()).isGreaterThan(10);
     }
 
-    @Test
-    void marginKIsTheLowestObjectTemperatureWithinTheCurrentLimit() {
-        // Self-consistency: at objectK - marginK the load is just reachable with I <= rated Imax, not below it.
-        DriveLimits limits = DriveLimits.ofRatedImaxA(2.5);
+    static Stream<DriveLimits> currentLimits() {
+        return Stream.of(DriveLimits.NONE, DriveLimits.ofRatedImaxA(2.5), DriveLimits.ofRatedImaxA(3.8),
+                new DriveLimits(Double.NaN, Double.NaN, 3.0, Double.NaN));
+    }
+
+    @ParameterizedTest
+    @MethodSource("currentLimits")
+    void marginKIsTheLowestObjectTemperatureWithinTheCurrentLimit(DriveLimits limits) {
+        // Self-consistency: at objectK - marginK the load is just reachable within the current limit, not below it.
         Solved point = solved(solver.solve(TM_A, S10, limits));
         double lowestK = S10.objectK() - point.marginK();
         assertThat(point.marginK()).isPositive();
