@@ -27,6 +27,7 @@ public record DriveLimits(double ratedImaxA, double supplyMaxV, double supplyMax
         return new DriveLimits(ratedImaxA, Double.NaN, Double.NaN, Double.NaN);
     }
 
+    /** Whether a rated Imax was given. */
     public boolean hasRatedImax() {
         return !Double.isNaN(ratedImaxA);
     }

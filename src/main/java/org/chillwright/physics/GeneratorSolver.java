@@ -22,7 +22,7 @@ import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
  */
 public final class GeneratorSolver {
 
-    /** Root accuracy in current, A: 1 nA, far below any load current of interest. */
+    /** Root accuracy in current, A: 1 pA, so that powers near the flat optimum keep about 12 significant digits. */
     static final double CURRENT_ACCURACY_A = 1e-12;
     /** Accuracy of ln(RL/R) in the load searches: 1e-10, far below the 1e-6 needed on the load. */
     static final double LOAD_LOG_ACCURACY = 1e-10;

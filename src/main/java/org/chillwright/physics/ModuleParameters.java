@@ -188,6 +188,16 @@ public record ModuleParameters(double seebeckVPerK, double resistanceOhm, double
     }
 
     /**
+     * Ideal ΔTmax at a hot-side temperature, K: Th − Tc,min with Tc,min = 2Th/(√(1 + 2Z·Th) + 1), the
+     * root of Z·Tc²/2 + Tc − Th = 0 in its cancellation-free form (physics.md b, forward relations).
+     *
+     * @param hotSideK hot-side temperature Th, K, &gt; 0 (not checked: used on hot paths)
+     */
+    public double dtmaxK(double hotSideK) {
+        return hotSideK - 2 * hotSideK / (Math.sqrt(1 + 2 * figureOfMeritPerK() * hotSideK) + 1);
+    }
+
+    /**
      * Ideal maximum ratings at a hot-side temperature, constant properties (physics.md b, forward
      * relations; derived there and checked by brute force, case S02):
      * Tc,min = 2Th/(√(1 + 2Z·Th) + 1), ΔTmax = Th − Tc,min, Imax = S·Tc,min/R, Vmax = S·Th,
@@ -197,9 +207,8 @@ public record ModuleParameters(double seebeckVPerK, double resistanceOhm, double
      */
     public MaxRatings ratingsAt(double hotSideK) {
         Check.positive("hotSideK", hotSideK);
-        double z = figureOfMeritPerK();
-        double coldMinK = 2 * hotSideK / (Math.sqrt(1 + 2 * z * hotSideK) + 1); // root of Z·Tc²/2 + Tc − Th = 0
-        double dtMaxK = hotSideK - coldMinK;
+        double dtMaxK = dtmaxK(hotSideK);
+        double coldMinK = hotSideK - dtMaxK;
         double imaxA = seebeckVPerK * coldMinK / resistanceOhm;
         double vmaxV = seebeckVPerK * hotSideK;
         double qmaxW = seebeckVPerK * imaxA * (hotSideK + dtMaxK) / 2;

@@ -37,6 +37,8 @@ public final class OperatingPointSolver {
      * step, so 200 steps reach round-off from any start; well-posed cases take 4 to 8.
      */
     static final int MAX_ITERATIONS = 200;
+    /** Cap for the 2-D Newton on the capacity peak: it converges in 3 to 6 steps from the starts used, or is abandoned. */
+    static final int NEWTON_2D_ITERATIONS = 30;
     /** Evaluation cap for the generic Brent root in the fixed-voltage drive; each evaluation is a 2x2 solve. */
     static final int MAX_EVALUATIONS = 500;
     /** Fraction of the runaway current used as the end of a bracket: at the runaway current itself Th is infinite. */
@@ -294,15 +296,6 @@ public final class OperatingPointSolver {
         return s * tc - r * i - k * rh * (r * i + s * th) / d;
     }
 
-    /** d²Qc/dI² = −R − K·Th'', Th'' = Rh(R + 2S·Th')/d; negative everywhere below runaway (concavity). */
-    private static double coldHeatCurvature(double s, double r, double k, double tc, double tamb, double rh,
-                                            double i) {
-        double d = 1 + rh * k - rh * s * i;
-        double th = (tamb + rh * (0.5 * r * i * i + k * tc)) / d;
-        double thSlope = rh * (r * i + s * th) / d;
-        return -r - k * rh * (r + 2 * s * thSlope) / d;
-    }
-
     /**
      * ∂Qc/∂Tc at fixed I, W/K: S·I + K(1 − Rh·S·I)/d. Qc is affine in Tc at fixed I (Th is), so this
      * is exact, and at the peak it is the slope of the peak value against Tc (envelope theorem).
@@ -329,13 +322,17 @@ public final class OperatingPointSolver {
         double highA = Math.min(s * tc / r, runawayCurrentA(s, k, rh) * RUNAWAY_GUARD);
         double i = guessA > lowA && guessA < highA ? guessA : 0.5 * highA;
         for (int n = 0; n < MAX_ITERATIONS; n++) {
-            double slope = coldHeatSlope(s, r, k, tc, tamb, rh, i);
+            double d = 1 + rh * k - rh * s * i;                       // slope and curvature share d and Th
+            double th = (tamb + rh * (0.5 * r * i * i + k * tc)) / d;
+            double thSlope = rh * (r * i + s * th) / d;               // Th'
+            double slope = s * tc - r * i - k * thSlope;              // dQc/dI
+            double curvature = -r - k * rh * (r + 2 * s * thSlope) / d; // d²Qc/dI² < 0
             if (slope > 0) {
                 lowA = i;
             } else {
                 highA = i;
             }
-            double next = i - slope / coldHeatCurvature(s, r, k, tc, tamb, rh, i);
+            double next = i - slope / curvature;
             if (!(next > lowA && next < highA)) {
                 next = 0.5 * (lowA + highA);
             }
@@ -354,6 +351,11 @@ public final class OperatingPointSolver {
      */
     private static CapacityPeak capacityAtObject(double s, double r, double k, double objectK, double rc,
                                                  double tamb, double rh, double startW, double peakGuessA) {
+        // Tc + Rint,c·Qc(I, Tc) = Tobj on the peak dQc/dI = 0
+        double[] peak = peakOnLine(s, r, k, tamb, rh, 1, rc, objectK, peakGuessA, objectK - startW * rc);
+        if (peak != null) {
+            return new CapacityPeak(peak[0], coldHeatW(s, r, k, peak[1], tamb, rh, peak[0]));
+        }
         double q = startW;
         double peakA = peakGuessA;
         for (int n = 0; n < MAX_ITERATIONS; n++) {
@@ -377,6 +379,19 @@ public final class OperatingPointSolver {
      */
     private static double lowestColdSideK(double s, double r, double k, double tamb, double rh, double loadW,
                                           double limitA, double startK, double peakGuessA) {
+        if (limitA < Double.POSITIVE_INFINITY) {
+            // Qc is affine in Tc at fixed I: the cold face at which the limit current pumps exactly the load.
+            double atLimitK = startK + (loadW - coldHeatW(s, r, k, startK, tamb, rh, limitA))
+                    / coldSideSensitivityWPerK(s, k, rh, limitA);
+            if (atLimitK > 0 && limitA < runawayCurrentA(s, k, rh)
+                    && coldHeatSlope(s, r, k, atLimitK, tamb, rh, limitA) >= 0) {
+                return atLimitK; // the peak there lies at or beyond the limit, so the limit binds
+            }
+        }
+        double[] peak = peakOnLine(s, r, k, tamb, rh, 0, 1, loadW, peakGuessA, startK); // Qc(I, Tc) = Q on the peak
+        if (peak != null) {
+            return peak[1];
+        }
         double tc = startK;
         double peakA = peakGuessA;
         for (int n = 0; n < MAX_ITERATIONS; n++) {
@@ -394,6 +409,47 @@ public final class OperatingPointSolver {
             }
         }
         return tc;
+    }
+
+    /**
+     * The capacity peak on a line in (Tc, Qc): solves α·Tc + β·Qc(I, Tc) = γ together with
+     * dQc/dI = 0 by 2-D Newton in (I, Tc) with the analytic Jacobian
+     * [[β·Qc_I, α + β·B], [Qc_II, B']], where B = ∂Qc/∂Tc and B' = S(1 − (Rh·K/d)²). Quadratic from the
+     * nearby start the callers give. Returns {I, Tc}, or null when an iterate leaves the physical
+     * domain (I &lt; 0, Tc ≤ 0, beyond runaway) or it does not settle, so that the caller falls back to
+     * its nested bracketed iteration.
+     */
+    private static double[] peakOnLine(double s, double r, double k, double tamb, double rh, double alpha,
+                                       double beta, double gamma, double i, double tc) {
+        for (int n = 0; n < NEWTON_2D_ITERATIONS; n++) {
+            double d = 1 + rh * k - rh * s * i;
+            if (!(d > 0 && tc > 0 && i >= 0)) {
+                return null;
+            }
+            double th = (tamb + rh * (0.5 * r * i * i + k * tc)) / d;
+            double thSlope = rh * (r * i + s * th) / d;
+            double qc = s * i * tc - 0.5 * r * i * i - k * (th - tc);
+            double slope = s * tc - r * i - k * thSlope;                  // Qc_I
+            double curvature = -r - k * rh * (r + 2 * s * thSlope) / d;   // Qc_II
+            double ratio = rh * k / d;
+            double sensitivity = s * i + k * (1 - ratio);                 // B = ∂Qc/∂Tc
+            double crossSlope = s * (1 - ratio * ratio);                  // B' = ∂Qc_I/∂Tc
+            double f1 = alpha * tc + beta * qc - gamma;
+            double j11 = beta * slope;
+            double j12 = alpha + beta * sensitivity;
+            double det = j11 * crossSlope - j12 * curvature;
+            if (!(det != 0)) {
+                return null;
+            }
+            double stepA = (-f1 * crossSlope + slope * j12) / det;
+            double stepK = (-slope * j11 + f1 * curvature) / det;
+            i += stepA;
+            tc += stepK;
+            if (Math.abs(stepA) <= CURRENT_ACCURACY_A && Math.abs(stepK) <= TEMPERATURE_ACCURACY_K) {
+                return i >= 0 && tc > 0 ? new double[] {i, tc} : null;
+            }
+        }
+        return null;
     }
 
     private static double fixedCurrentDeterminant(double s, double k, double rh, double i) {
@@ -500,7 +556,7 @@ public final class OperatingPointSolver {
                     "the current %.2f A is %.0f %% of the rated Imax %.2f A (above %.0f %% leaves little reserve)",
                     currentA, 100 * currentA / limits.ratedImaxA(), limits.ratedImaxA(), 100 * NEAR_IMAX_FRACTION));
         }
-        double dtMaxK = module.ratingsAt(hotK).dtmaxK();
+        double dtMaxK = module.dtmaxK(hotK);
         if (hotK - coldK > NEAR_DTMAX_FRACTION * dtMaxK) {
             warnings = add(warnings, Warning.Code.NEAR_DTMAX, format(
                     "the junction difference %.1f K is %.0f %% of ΔTmax %.1f K at this hot side (above %.0f %%"

@@ -1,0 +1,252 @@
+package org.chillwright.physics;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.stream.Stream;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+
+class OperatingPointSolverTest {
+
+    /** Synthetic module TM-A of check-cases.json. */
+    private static final ModuleParameters TM_A = new ModuleParameters(0.04, 2.4, 0.25);
+    /** The set-up of check case S10: 10 W at 278.15 K, ambient 298.15 K, sink 0.3, cold 0.1, hot 0.05 K/W. */
+    private static final CoolingCase S10 = new CoolingCase(278.15, 298.15, 10, 0.3, 0.1, 0.05);
+
+    private final OperatingPointSolver solver = new OperatingPointSolver();
+
+    private Solved solved(OperatingPoint point) {
+        assertThat(point).isInstanceOf(Solved.class);
+        return (Solved) point;
+    }
+
+    private Infeasible infeasible(OperatingPoint point) {
+        assertThat(point).isInstanceOf(Infeasible.class);
+        return (Infeasible) point;
+    }
+
+    @Test
+    void needsNoCurrentWhenConductionCarriesTheLoad() {
+        // Source: passive case, physics.md e: Qc(0) >= Qload needs no current.
+        var warmObject = new CoolingCase(310, 298.15, 1, 0.3, 0.1, 0.05);
+        Solved point = solved(solver.solve(TM_A, warmObject, DriveLimits.NONE));
+        assertThat(point.currentA()).isZero();
+        assertThat(point.powerW()).isZero();
+    }
+
+    @Test
+    void returnsTheLowerRootBelowThePeak() {
+        // Source: root choice, physics.md e and pitfall 8: the lower root has the smaller current.
+        Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
+        CapacityPeak peak = OperatingPointSolver.capacityPeak(TM_A, S10.coldSideAtLoadK(), S10.ambientK(),
+                S10.hotPathKPerW());
+        assertThat(point.currentA()).isLessThan(peak.currentA());
+        assertThat(TM_A.coldSideHeatW(point.currentA(), point.coldSideK(), point.hotSideK()))
+                .isCloseTo(10, within(1e-9));
+    }
+
+    @Test
+    void satisfiesTheHotSideNetwork() {
+        // Source: thermal network Th = Tamb + Qh·Rh, physics.md e.
+        Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
+        assertThat(point.hotSideK()).isCloseTo(298.15 + 0.35 * point.heatRejectedW(), within(1e-9));
+    }
+
+    @Test
+    void fastPathMatchesTheFullSolve() {
+        Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
+        double currentA = OperatingPointSolver.currentForLoadA(0.04, 2.4, 0.25, S10.coldSideAtLoadK(), 298.15, 0.35, 10);
+        double cop = OperatingPointSolver.copAtLoad(0.04, 2.4, 0.25, S10.coldSideAtLoadK(), 298.15, 0.35, 10);
+        assertThat(currentA).isEqualTo(point.currentA());
+        assertThat(cop).isCloseTo(point.cop(), within(1e-12));
+    }
+
+    @Test
+    void fastPathIsNaNAboveCapacity() {
+        assertThat(OperatingPointSolver.currentForLoadA(0.04, 2.4, 0.25, 275.65, 298.15, 0.35, 25)).isNaN();
+    }
+
+    @Test
+    void maxHeatLoadIsTheEdgeOfFeasibility() {
+        // Self-consistency: just below the reported capacity the load is solved, just above it is not.
+        Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
+        double maxW = point.maxHeatLoadW();
+        assertThat(solver.solve(TM_A, S10.withHeatLoadW(maxW * (1 - 1e-6)), DriveLimits.NONE).feasible()).isTrue();
+        assertThat(infeasible(solver.solve(TM_A, S10.withHeatLoadW(maxW * (1 + 1e-6)), DriveLimits.NONE)).reason())
+                .isEqualTo(Reason.LOAD_ABOVE_CAPACITY);
+    }
+
+    @Test
+    void loadMarginIsSpareCapacityOverLoad() {
+        Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
+        assertThat(point.loadMarginPct()).isCloseTo((point.maxHeatLoadW() - 10) / 10 * 100, within(1e-9));
+        assertThat(point.maxHeatLoadW()).isGreaterThan(10);
+    }
+
+    static Stream<DriveLimits> currentLimits() {
+        return Stream.of(DriveLimits.NONE, DriveLimits.ofRatedImaxA(2.5), DriveLimits.ofRatedImaxA(3.8),
+                new DriveLimits(Double.NaN, Double.NaN, 3.0, Double.NaN));
+    }
+
+    @ParameterizedTest
+    @MethodSource("currentLimits")
+    void marginKIsTheLowestObjectTemperatureWithinTheCurrentLimit(DriveLimits limits) {
+        // Self-consistency: at objectK - marginK the load is just reachable within the current limit, not below it.
+        Solved point = solved(solver.solve(TM_A, S10, limits));
+        double lowestK = S10.objectK() - point.marginK();
+        assertThat(point.marginK()).isPositive();
+        assertThat(solver.solve(TM_A, objectAt(lowestK + 1e-4), limits).feasible()).isTrue();
+        assertThat(solver.solve(TM_A, objectAt(lowestK - 1e-4), limits).feasible()).isFalse();
+    }
+
+    private static CoolingCase objectAt(double objectK) {
+        return new CoolingCase(objectK, 298.15, 10, 0.3, 0.1, 0.05);
+    }
+
+    @Test
+    void copStaysBelowTheBestCopAtTheSameJunctions() {
+        // Source: COPmax at fixed Tc, Th, physics.md f (Ioffe 1957, from memory).
+        Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
+        assertThat(point.cop()).isLessThanOrEqualTo(point.maxCop());
+        assertThat(point.copOptimalCurrentA()).isLessThan(point.currentA());
+    }
+
+    @Test
+    void reportsFractionOfImax() {
+        Solved point = solved(solver.solve(TM_A, S10, DriveLimits.ofRatedImaxA(3.9)));
+        assertThat(point.fractionOfImax()).isCloseTo(point.currentA() / 3.9, within(1e-15));
+    }
+
+    @Test
+    void raisesNoWarningInAComfortablePoint() {
+        assertThat(solved(solver.solve(TM_A, S10, DriveLimits.NONE)).warnings()).isEmpty();
+    }
+
+    @Test
+    void explainsLoadAboveCapacity() {
+        Infeasible point = infeasible(solver.solve(TM_A, S10.withHeatLoadW(25), DriveLimits.NONE));
+        assertThat(point.reason()).isEqualTo(Reason.LOAD_ABOVE_CAPACITY);
+        assertThat(point.detail()).contains("needs 25.00 W", "peak there is 14.12 W at 3.8");
+    }
+
+    @Test
+    void explainsTemperatureDifferenceBeyondReach() {
+        var tooCold = new CoolingCase(200, 298.15, 0.1, 0.3, 0.1, 0.05);
+        Infeasible point = infeasible(solver.solve(TM_A, tooCold, DriveLimits.NONE));
+        assertThat(point.reason()).isEqualTo(Reason.DELTA_T_BEYOND_REACH);
+        assertThat(point.detail()).contains("199.99 K", "even with no load");
+    }
+
+    @Test
+    void explainsColdFaceBelowAbsoluteZero() {
+        var impossible = new CoolingCase(5, 298.15, 10, 0.3, 1.0, 0.05);
+        Infeasible point = infeasible(solver.solve(TM_A, impossible, DriveLimits.NONE));
+        assertThat(point.reason()).isEqualTo(Reason.DELTA_T_BEYOND_REACH);
+        assertThat(point.detail()).contains("-5.00 K", "absolute zero");
+    }
+
+    @Test
+    void explainsCurrentAboveImax() {
+        Infeasible point = infeasible(solver.solve(TM_A, S10, DriveLimits.ofRatedImaxA(1.5)));
+        assertThat(point.reason()).isEqualTo(Reason.CURRENT_ABOVE_IMAX);
+        assertThat(point.detail()).isEqualTo("needs 1.96 A, above the rated Imax of 1.50 A");
+    }
+
+    @Test
+    void explainsSupplyCurrentExceeded() {
+        var limits = new DriveLimits(Double.NaN, Double.NaN, 1.5, Double.NaN);
+        Infeasible point = infeasible(solver.solve(TM_A, S10, limits));
+        assertThat(point.reason()).isEqualTo(Reason.SUPPLY_CURRENT_EXCEEDED);
+        assertThat(point.detail()).isEqualTo("needs 1.96 A, above the supply's 1.50 A");
+    }
+
+    @Test
+    void explainsSupplyVoltageExceeded() {
+        var limits = new DriveLimits(Double.NaN, 5.0, Double.NaN, Double.NaN);
+        Infeasible point = infeasible(solver.solve(TM_A, S10, limits));
+        assertThat(point.reason()).isEqualTo(Reason.SUPPLY_VOLTAGE_EXCEEDED);
+        assertThat(point.detail()).isEqualTo("needs 5.85 V at 1.96 A, above the supply's 5.00 V");
+    }
+
+    @Test
+    void explainsRunawayAtFixedCurrent() {
+        // Source: det = K + S·I - Rh·S²·I² <= 0 has no steady state, physics.md e.2; with Rh = 10 K/W the
+        // determinant vanishes at (1 + √(1 + 4·Rh·K))/(2·Rh·S) = 5.40 A (hand arithmetic).
+        var weakSink = new CoolingCase(278.15, 298.15, 1, 9.95, 0.1, 0.05);
+        Infeasible point = infeasible(solver.atCurrent(ModuleArray.single(TM_A), weakSink, DriveLimits.NONE, 6));
+        assertThat(point.reason()).isEqualTo(Reason.HEAT_SINK_RUNAWAY);
+        assertThat(point.detail()).contains("runaway from 5.40 A");
+    }
+
+    @Test
+    void warnsNearImax() {
+        // Threshold 0.8·Imax: common practice (no source).
+        Solved point = solved(solver.solve(TM_A, S10, DriveLimits.ofRatedImaxA(2.2)));
+        assertThat(point.hasWarning(Warning.Code.NEAR_IMAX)).isTrue();
+    }
+
+    @Test
+    void warnsNearDtmax() {
+        // Threshold 0.7·ΔTmax: common practice (no source).
+        var deep = new CoolingCase(245, 298.15, 0.5, 0.05, 0.0, 0.0);
+        Solved point = solved(solver.solve(TM_A, deep, DriveLimits.NONE));
+        assertThat(point.hasWarning(Warning.Code.NEAR_DTMAX)).isTrue();
+    }
+
+    @Test
+    void warnsAboveMaxHotSide() {
+        var limits = new DriveLimits(Double.NaN, Double.NaN, Double.NaN, 300);
+        Solved point = solved(solver.solve(TM_A, S10, limits));
+        assertThat(point.hasWarning(Warning.Code.HOT_SIDE_ABOVE_LIMIT)).isTrue();
+    }
+
+    @Test
+    void warnsOfCondensation() {
+        // Dew point 16.7 °C at 25 °C and 60 % (case S17); the cold face is at 4 °C. Margin 2 K: common practice.
+        Solved point = solved(solver.solve(TM_A, S10.withRelativeHumidity(0.6), DriveLimits.NONE));
+        assertThat(point.hasWarning(Warning.Code.CONDENSATION_RISK)).isTrue();
+        assertThat(Units.celsiusFromKelvin(point.dewPointK())).isCloseTo(16.7, within(0.01));
+    }
+
+    @Test
+    void fixedVoltageReachesTheFixedCurrentPoint() {
+        // Consistency of e.2 and e.3: driving at the voltage of a 2.5 A point gives 2.5 A back.
+        var c = new CoolingCase(298.15, 298.15, 8, 0.35, 0.1, 0.0);
+        ModuleArray single = ModuleArray.single(TM_A);
+        Solved atCurrent = solved(solver.atCurrent(single, c, DriveLimits.NONE, 2.5));
+        Solved atVoltage = solved(solver.atVoltage(single, c, DriveLimits.NONE, atCurrent.voltageV()));
+        assertThat(atVoltage.currentA()).isCloseTo(2.5, within(1e-8));
+        assertThat(atVoltage.objectK()).isCloseTo(atCurrent.objectK(), within(1e-6));
+    }
+
+    @Test
+    void splitsAnArrayIntoModuleShares() {
+        // Source: physics.md g: I per string, V per series position, heat per module.
+        var array = new ModuleArray(TM_A, 2, 3);
+        var shared = new CoolingCase(278.15, 298.15, 30, 0.05, 0.02, 0.01);
+        Solved point = solved(solver.solve(array, shared, DriveLimits.NONE));
+        assertThat(point.perModule().currentA()).isCloseTo(point.currentA() / 3, within(1e-12));
+        assertThat(point.perModule().voltageV()).isCloseTo(point.voltageV() / 2, within(1e-12));
+        assertThat(point.perModule().heatLoadW()).isCloseTo(5, within(1e-12));
+    }
+
+    @Test
+    void rejectsNegativeSinkResistance() {
+        assertThatThrownBy(() -> new CoolingCase(278.15, 298.15, 10, -1.0, 0.1, 0.05))
+                .isInstanceOfSatisfying(InvalidQuantityException.class, e -> {
+                    assertThat(e.field()).isEqualTo("sinkResistanceKPerW");
+                    assertThat(e).hasMessage("sinkResistanceKPerW must be >= 0, was -1.0");
+                });
+    }
+
+    @Test
+    void rejectsNegativeDriveCurrent() {
+        assertThatThrownBy(() -> solver.atCurrent(ModuleArray.single(TM_A), S10, DriveLimits.NONE, -1))
+                .isInstanceOfSatisfying(InvalidQuantityException.class,
+                        e -> assertThat(e.field()).isEqualTo("currentA"));
+    }
+}
