@@ -1,0 +1,50 @@
+package org.chillwright.physics;
+
+/**
+ * {@code seriesCount × parallelCount} identical modules sharing isothermal cold and hot plates
+ * (physics.md g; circuit algebra of identical modules, derived there; case S14).
+ *
+ * @param module        parameters of one module
+ * @param seriesCount   modules in series per string, ≥ 1
+ * @param parallelCount parallel strings, ≥ 1
+ */
+public record ModuleArray(ModuleParameters module, int seriesCount, int parallelCount) {
+
+    public ModuleArray {
+        if (module == null) {
+            throw new InvalidQuantityException("module", Double.NaN, "module must be given, was null");
+        }
+        Check.atLeastOne("seriesCount", seriesCount);
+        Check.atLeastOne("parallelCount", parallelCount);
+    }
+
+    /** A single module. */
+    public static ModuleArray single(ModuleParameters module) {
+        return new ModuleArray(module, 1, 1);
+    }
+
+    /** Number of modules, ns·np. */
+    public int moduleCount() {
+        return seriesCount * parallelCount;
+    }
+
+    /** The equivalent single module seen at the array terminals ({@link ModuleParameters#inArray}). */
+    public ModuleParameters equivalent() {
+        return module.inArray(seriesCount, parallelCount);
+    }
+
+    /**
+     * Per-module share of array terminal values: I/np, V/ns, and heat and power divided by ns·np.
+     *
+     * @param currentA      array terminal current, A
+     * @param voltageV      array terminal voltage, V
+     * @param heatLoadW     heat pumped by the whole array, W
+     * @param heatRejectedW heat released by the whole array, W
+     * @param powerW        electrical power of the whole array, W
+     */
+    public ModuleShare share(double currentA, double voltageV, double heatLoadW, double heatRejectedW, double powerW) {
+        int n = moduleCount();
+        return new ModuleShare(currentA / parallelCount, voltageV / seriesCount, heatLoadW / n, heatRejectedW / n,
+                powerW / n);
+    }
+}

@@ -1,0 +1,533 @@
+package org.chillwright.physics;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.function.DoubleUnaryOperator;
+
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.exception.MathIllegalStateException;
+import org.apache.commons.math3.exception.NoBracketingException;
+
+/**
+ * Steady operating point of a heat-sink-coupled cooler (physics.md e): the current that removes a
+ * load at a required object temperature (e.1), or the object temperature reached at a fixed
+ * current (e.2) or voltage (e.3). Ideal constant-property equations (physics.md a) with the
+ * thermal network Tc = Tobj − Q·Rint,c and Th = Tamb + Qh·Rh, Rh = Rint,h + Rsink (physics.md e,
+ * derived there; cases S10, S10b, S11, S12).
+ *
+ * <p>Stateless and thread-safe. The static {@link #currentForLoadA} and {@link #copAtLoad} are the
+ * allocation-free path for ranking many candidates; {@link #solve} adds the capacity, margins,
+ * COP optimum and warnings for the candidates shown.
+ */
+public final class OperatingPointSolver {
+
+    /**
+     * Newton stops once a step in current is below this, A. The iterations converge quadratically,
+     * so the error left after a 1e-9 A step is many orders smaller, well inside the 1e-9 relative
+     * accuracy physics.md asks for at currents of 0.1 A and up.
+     */
+    static final double CURRENT_ACCURACY_A = 1e-9;
+    /** The capacity iteration stops once a step in heat is below this, W: 1 nW against loads of mW and up. */
+    static final double HEAT_ACCURACY_W = 1e-9;
+    /** The lowest-object-temperature iteration stops once a step is below this, K: 1 nK against a shown 0.01 K. */
+    static final double TEMPERATURE_ACCURACY_K = 1e-9;
+    /**
+     * Iteration cap. Near a double root (load exactly at the peak) Newton only halves the error per
+     * step, so 200 steps reach round-off from any start; well-posed cases take 4 to 8.
+     */
+    static final int MAX_ITERATIONS = 200;
+    /** Evaluation cap for the generic Brent root in the fixed-voltage drive; each evaluation is a 2x2 solve. */
+    static final int MAX_EVALUATIONS = 500;
+    /** Fraction of the runaway current used as the end of a bracket: at the runaway current itself Th is infinite. */
+    private static final double RUNAWAY_GUARD = 1 - 1e-9;
+
+    /** Warn above this fraction of rated Imax: common practice (no source), physics.md l. */
+    static final double NEAR_IMAX_FRACTION = 0.8;
+    /** Warn above this fraction of ΔTmax at the solved hot side: common practice (no source), physics.md l. */
+    static final double NEAR_DTMAX_FRACTION = 0.7;
+    /** Warn when the cold face is less than this above the dew point, K: common practice (no source), physics.md k. */
+    static final double DEW_POINT_MARGIN_K = 2.0;
+
+    private static final DewPoint DEW_POINT = new DewPointMagnus();
+
+    /**
+     * Lower-root current that removes the case's load at its object temperature, single module.
+     * See {@link #solve(ModuleArray, CoolingCase, DriveLimits)}.
+     */
+    public OperatingPoint solve(ModuleParameters module, CoolingCase coolingCase, DriveLimits limits) {
+        return solve(ModuleArray.single(module), coolingCase, limits);
+    }
+
+    /**
+     * Current that removes {@code heatLoadW} from the object held at {@code objectK} (physics.md e.1).
+     * Returns the lower root of Qc(I) = Qload (low current, low power, high COP; the upper root is
+     * on the over-driven side and never returned), I = 0 when conduction alone carries the load
+     * (passive case), or {@link Infeasible} with {@link Reason#DELTA_T_BEYOND_REACH},
+     * {@link Reason#LOAD_ABOVE_CAPACITY}, {@link Reason#CURRENT_ABOVE_IMAX},
+     * {@link Reason#SUPPLY_CURRENT_EXCEEDED} or {@link Reason#SUPPLY_VOLTAGE_EXCEEDED}.
+     *
+     * @param array       the modules and their wiring (terminal values are the array's)
+     * @param coolingCase load, temperatures and thermal resistances
+     * @param limits      rated Imax of the array, supply limits, hot-side limit (any may be absent)
+     */
+    public OperatingPoint solve(ModuleArray array, CoolingCase coolingCase, DriveLimits limits) {
+        ModuleParameters module = array.equivalent();
+        double s = module.seebeckVPerK();
+        double r = module.resistanceOhm();
+        double k = module.conductanceWPerK();
+        double ambientK = coolingCase.ambientK();
+        double rh = coolingCase.hotPathKPerW();
+        double loadW = coolingCase.heatLoadW();
+        double coldK = coolingCase.coldSideAtLoadK();
+        if (!(coldK > 0)) {
+            return new Infeasible(Reason.DELTA_T_BEYOND_REACH, format(
+                    "holding the object at %.2f K with %.2f W through %.3f K/W would need the cold face at %.2f K,"
+                            + " at or below absolute zero",
+                    coolingCase.objectK(), loadW, coolingCase.coldInterfaceKPerW(), coldK));
+        }
+        double currentA = currentForLoadA(s, r, k, coldK, ambientK, rh, loadW);
+        if (Double.isNaN(currentA)) {
+            return noCurrentRemovesLoad(s, r, k, coolingCase, coldK);
+        }
+        double hotK = hotSideK(s, r, k, coldK, ambientK, rh, currentA);
+        double voltageV = module.voltageV(currentA, coldK, hotK);
+        Infeasible overLimit = limitViolation(limits, currentA, voltageV);
+        if (overLimit != null) {
+            return overLimit;
+        }
+        return complete(array, module, coolingCase, limits, currentA, voltageV, coldK, hotK, coolingCase.objectK());
+    }
+
+    /**
+     * Object temperature reached at a fixed terminal current with the case's load (physics.md e.2,
+     * case S12): the linear 2x2 system
+     * (S·I + K)Tc − K·Th = Q + ½RI², −Rh·K·Tc + (1 + Rh·K − Rh·S·I)Th = Tamb + ½Rh·R·I², by Cramer's
+     * rule; Tobj = Tc + Rint,c·Q. Its determinant is K + S·I − Rh·S²·I²; at or below zero there is no
+     * steady state ({@link Reason#HEAT_SINK_RUNAWAY}). The case's {@code objectK} is not used.
+     *
+     * @param currentA terminal current, A, ≥ 0
+     */
+    public OperatingPoint atCurrent(ModuleArray array, CoolingCase coolingCase, DriveLimits limits, double currentA) {
+        Check.nonNegative("currentA", currentA);
+        ModuleParameters module = array.equivalent();
+        double s = module.seebeckVPerK();
+        double r = module.resistanceOhm();
+        double k = module.conductanceWPerK();
+        double rh = coolingCase.hotPathKPerW();
+        double det = fixedCurrentDeterminant(s, k, rh, currentA);
+        if (!(det > 0)) {
+            return new Infeasible(Reason.HEAT_SINK_RUNAWAY, format(
+                    "at %.2f A the hot side has no steady state: the Peltier heat grows with the hot-side temperature"
+                            + " faster than the %.3f K/W hot path rejects it (runaway from %.2f A)",
+                    currentA, rh, fixedCurrentRunawayA(s, k, rh)));
+        }
+        double[] junctionK = fixedCurrentJunctionsK(s, r, k, coolingCase, currentA, det);
+        double coldK = junctionK[0];
+        double hotK = junctionK[1];
+        double voltageV = module.voltageV(currentA, coldK, hotK);
+        Infeasible overLimit = limitViolation(limits, currentA, voltageV);
+        if (overLimit != null) {
+            return overLimit;
+        }
+        double objectK = coldK + coolingCase.coldInterfaceKPerW() * coolingCase.heatLoadW();
+        return complete(array, module, coolingCase, limits, currentA, voltageV, coldK, hotK, objectK);
+    }
+
+    /**
+     * Object temperature reached at a fixed terminal voltage with the case's load (physics.md e.3):
+     * a 1-D root in I of S(Th − Tc) + I·R = V with (Tc, Th) from the fixed-current system, found by
+     * Brent's method on a bracket from 0 (where the voltage is at most 0) to a current where it
+     * exceeds V. The case's {@code objectK} is not used.
+     *
+     * @param voltageV terminal voltage, V, &gt; 0
+     */
+    public OperatingPoint atVoltage(ModuleArray array, CoolingCase coolingCase, DriveLimits limits, double voltageV) {
+        Check.positive("voltageV", voltageV);
+        ModuleParameters module = array.equivalent();
+        double s = module.seebeckVPerK();
+        double r = module.resistanceOhm();
+        double k = module.conductanceWPerK();
+        double rh = coolingCase.hotPathKPerW();
+        double runawayA = fixedCurrentRunawayA(s, k, rh);
+        DoubleUnaryOperator surplusV = currentA -> {
+            double[] junctionK = fixedCurrentJunctionsK(s, r, k, coolingCase, currentA,
+                    fixedCurrentDeterminant(s, k, rh, currentA));
+            return module.voltageV(currentA, junctionK[0], junctionK[1]) - voltageV;
+        };
+        double highA = Math.min(voltageV / r, runawayA * RUNAWAY_GUARD);
+        for (int doubling = 0; surplusV.applyAsDouble(highA) < 0; doubling++) {
+            if (doubling == 64 || highA >= runawayA * RUNAWAY_GUARD) {
+                return new Infeasible(Reason.HEAT_SINK_RUNAWAY, format(
+                        "no steady state reaches %.2f V: the hot side runs away from %.2f A before the voltage"
+                                + " is reached", voltageV, runawayA));
+            }
+            highA = Math.min(2 * highA, runawayA * RUNAWAY_GUARD);
+        }
+        var solver = new BrentSolver(CURRENT_ACCURACY_A); // holds per-call state: never share it
+        double currentA;
+        try {
+            currentA = solver.solve(MAX_EVALUATIONS, surplusV::applyAsDouble, 0.0, highA);
+        } catch (NoBracketingException | MathIllegalStateException e) {
+            throw new IllegalStateException(format("fixed-voltage solve failed for %.4f V on [0, %.4f] A", voltageV,
+                    highA), e);
+        }
+        return atCurrent(array, coolingCase, limits, currentA);
+    }
+
+    /**
+     * Peak of the heat-sink-coupled Qc(I) at a fixed cold face (physics.md e, "Concavity"; cases S10b,
+     * S11): the root of dQc/dI = 0 on [0, min(S·Tc/R, I_run)].
+     *
+     * @param module       module (or array equivalent) parameters
+     * @param coldSideK    cold-face temperature Tc, K, &gt; 0
+     * @param ambientK     ambient temperature, K, &gt; 0
+     * @param hotPathKPerW hot interface + heat sink Rh, K/W, ≥ 0
+     */
+    public static CapacityPeak capacityPeak(ModuleParameters module, double coldSideK, double ambientK,
+                                            double hotPathKPerW) {
+        Check.positive("coldSideK", coldSideK);
+        Check.positive("ambientK", ambientK);
+        Check.nonNegative("hotPathKPerW", hotPathKPerW);
+        double s = module.seebeckVPerK();
+        double r = module.resistanceOhm();
+        double k = module.conductanceWPerK();
+        double peakA = peakCurrentA(s, r, k, coldSideK, ambientK, hotPathKPerW, Double.NaN);
+        return new CapacityPeak(peakA, coldHeatW(s, r, k, coldSideK, ambientK, hotPathKPerW, peakA));
+    }
+
+    /**
+     * Lower-root current, A, that pumps {@code heatLoadW} from a cold face at {@code coldSideK} into a
+     * hot path of {@code hotPathKPerW} to ambient; 0 in the passive case; NaN when no current does
+     * (load above the capacity peak, ΔT beyond reach, or a cold face at or below 0 K). Allocation-free,
+     * for ranking. Arguments are not checked.
+     *
+     * <p>Newton from I = 0 with the analytic derivative. Qc(I) is concave on [0, I_run)
+     * (physics.md e), so every tangent lies above the curve: from a point left of the lower root each
+     * Newton step lands at or left of that root, and the iterates rise monotonically to it, never
+     * reaching the upper root. If the slope becomes ≤ 0 (or the step passes the runaway current)
+     * before the load is reached, the iterates have passed the peak below the load, which only
+     * happens when the load is above capacity.
+     *
+     * @param seebeckVPerK     S, V/K
+     * @param resistanceOhm    R, Ω
+     * @param conductanceWPerK K, W/K
+     * @param coldSideK        Tc, K
+     * @param ambientK         Tamb, K
+     * @param hotPathKPerW     Rh = hot interface + heat sink, K/W
+     * @param heatLoadW        Qload, W
+     */
+    public static double currentForLoadA(double seebeckVPerK, double resistanceOhm, double conductanceWPerK,
+                                         double coldSideK, double ambientK, double hotPathKPerW, double heatLoadW) {
+        double s = seebeckVPerK;       // S, physics.md e
+        double r = resistanceOhm;      // R
+        double k = conductanceWPerK;   // K
+        double tc = coldSideK;         // Tc
+        double rh = hotPathKPerW;      // Rh
+        if (!(tc > 0)) {
+            return Double.NaN;
+        }
+        double i = 0;
+        for (int n = 0; n < MAX_ITERATIONS; n++) {
+            double d = 1 + rh * k - rh * s * i;            // denominator of Th(I)
+            if (!(d > 0)) {
+                return Double.NaN;
+            }
+            double th = (ambientK + rh * (0.5 * r * i * i + k * tc)) / d;
+            double surplusW = s * i * tc - 0.5 * r * i * i - k * (th - tc) - heatLoadW;
+            if (n == 0 && surplusW >= 0) {
+                return 0.0; // passive: conduction alone carries the load
+            }
+            double slope = s * tc - r * i - k * rh * (r * i + s * th) / d; // dQc/dI = S·Tc − R·I − K·Th'(I)
+            if (!(slope > 0)) {
+                return Double.NaN;
+            }
+            double step = -surplusW / slope;
+            i += step;
+            if (Math.abs(step) <= CURRENT_ACCURACY_A) {
+                return i;
+            }
+        }
+        return Double.NaN;
+    }
+
+    /**
+     * COP at the lower-root current for a load (see {@link #currentForLoadA}); NaN when infeasible,
+     * +∞ in the passive case. Allocation-free, for ranking; arguments as there.
+     */
+    public static double copAtLoad(double seebeckVPerK, double resistanceOhm, double conductanceWPerK,
+                                   double coldSideK, double ambientK, double hotPathKPerW, double heatLoadW) {
+        double i = currentForLoadA(seebeckVPerK, resistanceOhm, conductanceWPerK, coldSideK, ambientK, hotPathKPerW,
+                heatLoadW);
+        if (Double.isNaN(i)) {
+            return Double.NaN;
+        }
+        double th = hotSideK(seebeckVPerK, resistanceOhm, conductanceWPerK, coldSideK, ambientK, hotPathKPerW, i);
+        double powerW = i * (seebeckVPerK * (th - coldSideK) + i * resistanceOhm);
+        return powerW > 0 ? heatLoadW / powerW : Double.POSITIVE_INFINITY;
+    }
+
+    /**
+     * Hot-face temperature at current I with the cold face at Tc, K:
+     * Th(I) = [Tamb + Rh(½R·I² + K·Tc)]/(1 + Rh·K − Rh·S·I) (physics.md e, derived there). Valid
+     * only below the runaway current (1 + Rh·K)/(Rh·S). Arguments as {@link #currentForLoadA} plus
+     * the current, A.
+     */
+    public static double hotSideK(double seebeckVPerK, double resistanceOhm, double conductanceWPerK,
+                                  double coldSideK, double ambientK, double hotPathKPerW, double currentA) {
+        double d = 1 + hotPathKPerW * conductanceWPerK - hotPathKPerW * seebeckVPerK * currentA;
+        return (ambientK + hotPathKPerW * (0.5 * resistanceOhm * currentA * currentA
+                + conductanceWPerK * coldSideK)) / d;
+    }
+
+    // ---- kernel: heat-sink-coupled Qc(I) at fixed Tc and its derivatives (physics.md e) ----
+
+    static double coldHeatW(double s, double r, double k, double tc, double tamb, double rh, double i) {
+        double th = hotSideK(s, r, k, tc, tamb, rh, i);
+        return s * i * tc - 0.5 * r * i * i - k * (th - tc);
+    }
+
+    /** dQc/dI = S·Tc − R·I − K·Th', Th' = Rh(R·I + S·Th)/d. */
+    private static double coldHeatSlope(double s, double r, double k, double tc, double tamb, double rh, double i) {
+        double d = 1 + rh * k - rh * s * i;
+        double th = (tamb + rh * (0.5 * r * i * i + k * tc)) / d;
+        return s * tc - r * i - k * rh * (r * i + s * th) / d;
+    }
+
+    /** d²Qc/dI² = −R − K·Th'', Th'' = Rh(R + 2S·Th')/d; negative everywhere below runaway (concavity). */
+    private static double coldHeatCurvature(double s, double r, double k, double tc, double tamb, double rh,
+                                            double i) {
+        double d = 1 + rh * k - rh * s * i;
+        double th = (tamb + rh * (0.5 * r * i * i + k * tc)) / d;
+        double thSlope = rh * (r * i + s * th) / d;
+        return -r - k * rh * (r + 2 * s * thSlope) / d;
+    }
+
+    /**
+     * ∂Qc/∂Tc at fixed I, W/K: S·I + K(1 − Rh·S·I)/d. Qc is affine in Tc at fixed I (Th is), so this
+     * is exact, and at the peak it is the slope of the peak value against Tc (envelope theorem).
+     */
+    private static double coldSideSensitivityWPerK(double s, double k, double rh, double i) {
+        double d = 1 + rh * k - rh * s * i;
+        return s * i + k * (1 - rh * s * i) / d;
+    }
+
+    private static double runawayCurrentA(double s, double k, double rh) {
+        return rh > 0 ? (1 + rh * k) / (rh * s) : Double.POSITIVE_INFINITY;
+    }
+
+    /**
+     * Current of the capacity peak at fixed Tc: root of the decreasing dQc/dI on
+     * [0, min(S·Tc/R, I_run)] (dQc/dI &lt; S·Tc − R·I, physics.md e), Newton with the analytic
+     * second derivative, kept inside the shrinking bracket by bisection. 0 when dQc/dI(0) ≤ 0.
+     */
+    static double peakCurrentA(double s, double r, double k, double tc, double tamb, double rh, double guessA) {
+        if (coldHeatSlope(s, r, k, tc, tamb, rh, 0) <= 0) {
+            return 0.0;
+        }
+        double lowA = 0;
+        double highA = Math.min(s * tc / r, runawayCurrentA(s, k, rh) * RUNAWAY_GUARD);
+        double i = guessA > lowA && guessA < highA ? guessA : 0.5 * highA;
+        for (int n = 0; n < MAX_ITERATIONS; n++) {
+            double slope = coldHeatSlope(s, r, k, tc, tamb, rh, i);
+            if (slope > 0) {
+                lowA = i;
+            } else {
+                highA = i;
+            }
+            double next = i - slope / coldHeatCurvature(s, r, k, tc, tamb, rh, i);
+            if (!(next > lowA && next < highA)) {
+                next = 0.5 * (lowA + highA);
+            }
+            if (Math.abs(next - i) <= CURRENT_ACCURACY_A) {
+                return next;
+            }
+            i = next;
+        }
+        return i;
+    }
+
+    /**
+     * Most heat removable with the object held at {@code objectK}: the root Q of
+     * Qpk(Tobj − Q·Rint,c) = Q. Newton in Q with slope −(1 + Rint,c·∂Qc/∂Tc); Qpk is convex in Tc (a
+     * maximum of affine functions), so from a start with Qpk(…) ≥ Q the iterates rise monotonically.
+     */
+    private static CapacityPeak capacityAtObject(double s, double r, double k, double objectK, double rc,
+                                                 double tamb, double rh, double startW, double peakGuessA) {
+        double q = startW;
+        double peakA = peakGuessA;
+        for (int n = 0; n < MAX_ITERATIONS; n++) {
+            double tc = objectK - q * rc;
+            peakA = peakCurrentA(s, r, k, tc, tamb, rh, peakA);
+            double surplusW = coldHeatW(s, r, k, tc, tamb, rh, peakA) - q;
+            double slope = 1 + rc * coldSideSensitivityWPerK(s, k, rh, peakA);
+            double step = surplusW / (slope > 0 ? slope : 1);
+            q += step;
+            if (Math.abs(step) <= HEAT_ACCURACY_W) {
+                break;
+            }
+        }
+        return new CapacityPeak(peakA, q);
+    }
+
+    /**
+     * Lowest cold face, K, at which the load is still removed with I ≤ limitA: root of
+     * Qc(min(I_pk(Tc), limit), Tc) = Q. That capacity is convex and increasing in Tc, so Newton from
+     * the solved (feasible) Tc descends monotonically to the root.
+     */
+    private static double lowestColdSideK(double s, double r, double k, double tamb, double rh, double loadW,
+                                          double limitA, double startK, double peakGuessA) {
+        double tc = startK;
+        double peakA = peakGuessA;
+        for (int n = 0; n < MAX_ITERATIONS; n++) {
+            peakA = peakCurrentA(s, r, k, tc, tamb, rh, peakA);
+            double i = Math.min(peakA, limitA);
+            double surplusW = coldHeatW(s, r, k, tc, tamb, rh, i) - loadW;
+            double slope = coldSideSensitivityWPerK(s, k, rh, i);
+            if (!(slope > 0)) {
+                return tc;
+            }
+            double step = surplusW / slope;
+            tc -= step;
+            if (Math.abs(step) <= TEMPERATURE_ACCURACY_K) {
+                break;
+            }
+        }
+        return tc;
+    }
+
+    private static double fixedCurrentDeterminant(double s, double k, double rh, double i) {
+        return k + s * i - rh * s * s * i * i; // (S·I + K)(1 + Rh·K − Rh·S·I) − Rh·K², expanded
+    }
+
+    /** Positive root of K + S·I − Rh·S²·I² = 0, A; +∞ for an ideal sink. */
+    private static double fixedCurrentRunawayA(double s, double k, double rh) {
+        return rh > 0 ? (1 + Math.sqrt(1 + 4 * rh * k)) / (2 * rh * s) : Double.POSITIVE_INFINITY;
+    }
+
+    /** {Tc, Th} from the fixed-current 2x2 system by Cramer's rule (physics.md e.2). */
+    private static double[] fixedCurrentJunctionsK(double s, double r, double k, CoolingCase c, double i, double det) {
+        double rh = c.hotPathKPerW();
+        double a11 = s * i + k;
+        double a12 = -k;
+        double a21 = -rh * k;
+        double a22 = 1 + rh * k - rh * s * i;
+        double b1 = c.heatLoadW() + 0.5 * r * i * i;
+        double b2 = c.ambientK() + 0.5 * rh * r * i * i;
+        return new double[] {(b1 * a22 - a12 * b2) / det, (a11 * b2 - a21 * b1) / det};
+    }
+
+    private static Infeasible limitViolation(DriveLimits limits, double currentA, double voltageV) {
+        if (limits.hasRatedImax() && currentA > limits.ratedImaxA()) {
+            return new Infeasible(Reason.CURRENT_ABOVE_IMAX,
+                    format("needs %.2f A, above the rated Imax of %.2f A", currentA, limits.ratedImaxA()));
+        }
+        if (!Double.isNaN(limits.supplyMaxA()) && currentA > limits.supplyMaxA()) {
+            return new Infeasible(Reason.SUPPLY_CURRENT_EXCEEDED,
+                    format("needs %.2f A, above the supply's %.2f A", currentA, limits.supplyMaxA()));
+        }
+        if (!Double.isNaN(limits.supplyMaxV()) && voltageV > limits.supplyMaxV()) {
+            return new Infeasible(Reason.SUPPLY_VOLTAGE_EXCEEDED, format(
+                    "needs %.2f V at %.2f A, above the supply's %.2f V", voltageV, currentA, limits.supplyMaxV()));
+        }
+        return null;
+    }
+
+    private static Infeasible noCurrentRemovesLoad(double s, double r, double k, CoolingCase c, double coldK) {
+        double rh = c.hotPathKPerW();
+        double ambientK = c.ambientK();
+        double peakA = peakCurrentA(s, r, k, coldK, ambientK, rh, Double.NaN);
+        double peakW = coldHeatW(s, r, k, coldK, ambientK, rh, peakA);
+        if (peakW < 0) {
+            return new Infeasible(Reason.DELTA_T_BEYOND_REACH, format(
+                    "cannot hold the cold face at %.2f K (%.2f °C) against %.2f K ambient with a %.3f K/W hot path"
+                            + " even with no load: the best it does there is %.2f W at %.2f A",
+                    coldK, Units.celsiusFromKelvin(coldK), ambientK, rh, peakW, peakA));
+        }
+        CapacityPeak atObject = capacityAtObject(s, r, k, c.objectK(), c.coldInterfaceKPerW(), ambientK, rh,
+                Math.min(c.heatLoadW(), peakW), peakA);
+        return new Infeasible(Reason.LOAD_ABOVE_CAPACITY, format(
+                "needs %.2f W of cooling at a cold face of %.2f K; with this heat sink the peak there is %.2f W"
+                        + " at %.2f A, and at most %.2f W can be removed while holding the object at %.2f K (%.2f °C)",
+                c.heatLoadW(), coldK, peakW, peakA, atObject.heatW(), c.objectK(),
+                Units.celsiusFromKelvin(c.objectK())));
+    }
+
+    private static Solved complete(ModuleArray array, ModuleParameters module, CoolingCase c, DriveLimits limits,
+                                   double currentA, double voltageV, double coldK, double hotK, double objectK) {
+        double s = module.seebeckVPerK();
+        double r = module.resistanceOhm();
+        double k = module.conductanceWPerK();
+        double rh = c.hotPathKPerW();
+        double rc = c.coldInterfaceKPerW();
+        double ambientK = c.ambientK();
+        double loadW = c.heatLoadW();
+        double powerW = currentA * voltageV;
+        double rejectedW = loadW + powerW;
+        double cop = powerW > 0 ? loadW / powerW : Double.POSITIVE_INFINITY;
+
+        double peakA = peakCurrentA(s, r, k, coldK, ambientK, rh, currentA);
+        double peakW = coldHeatW(s, r, k, coldK, ambientK, rh, peakA);
+        CapacityPeak atObject = capacityAtObject(s, r, k, objectK, rc, ambientK, rh, Math.min(loadW, peakW), peakA);
+        double lowestColdK = lowestColdSideK(s, r, k, ambientK, rh, loadW, limits.currentLimitA(), coldK, peakA);
+        double marginK = objectK - (lowestColdK + loadW * rc);
+
+        double dewPointK = dewPointK(c);
+        List<Warning> warnings = warnings(module, limits, currentA, coldK, hotK, dewPointK);
+        double fractionOfImax = limits.hasRatedImax() ? currentA / limits.ratedImaxA() : Double.NaN;
+        return new Solved(currentA, voltageV, powerW, cop, objectK, coldK, hotK, rejectedW, loadW, fractionOfImax,
+                atObject.heatW(), atObject.currentA(), marginK, module.copOptimalCurrentA(coldK, hotK),
+                module.maxCop(coldK, hotK), dewPointK, warnings,
+                array.share(currentA, voltageV, loadW, rejectedW, powerW));
+    }
+
+    private static double dewPointK(CoolingCase c) {
+        if (!c.hasRelativeHumidity()) {
+            return Double.NaN;
+        }
+        double airC = Units.celsiusFromKelvin(c.ambientK());
+        if (airC < DewPointMagnus.LOWEST_AIR_C || airC > DewPointMagnus.HIGHEST_AIR_C) {
+            return Double.NaN; // outside the fit: no dew point rather than an extrapolated one
+        }
+        return DEW_POINT.dewPointK(c.ambientK(), c.relativeHumidity());
+    }
+
+    private static List<Warning> warnings(ModuleParameters module, DriveLimits limits, double currentA, double coldK,
+                                          double hotK, double dewPointK) {
+        List<Warning> warnings = null;
+        if (limits.hasRatedImax() && currentA > NEAR_IMAX_FRACTION * limits.ratedImaxA()) {
+            warnings = add(warnings, Warning.Code.NEAR_IMAX, format(
+                    "the current %.2f A is %.0f %% of the rated Imax %.2f A (above %.0f %% leaves little reserve)",
+                    currentA, 100 * currentA / limits.ratedImaxA(), limits.ratedImaxA(), 100 * NEAR_IMAX_FRACTION));
+        }
+        double dtMaxK = module.ratingsAt(hotK).dtmaxK();
+        if (hotK - coldK > NEAR_DTMAX_FRACTION * dtMaxK) {
+            warnings = add(warnings, Warning.Code.NEAR_DTMAX, format(
+                    "the junction difference %.1f K is %.0f %% of ΔTmax %.1f K at this hot side (above %.0f %%"
+                            + " the COP collapses)",
+                    hotK - coldK, 100 * (hotK - coldK) / dtMaxK, dtMaxK, 100 * NEAR_DTMAX_FRACTION));
+        }
+        if (!Double.isNaN(limits.maxHotSideK()) && hotK > limits.maxHotSideK()) {
+            warnings = add(warnings, Warning.Code.HOT_SIDE_ABOVE_LIMIT, format(
+                    "the hot face reaches %.2f K (%.1f °C), above the module's %.2f K (%.1f °C)",
+                    hotK, Units.celsiusFromKelvin(hotK), limits.maxHotSideK(),
+                    Units.celsiusFromKelvin(limits.maxHotSideK())));
+        }
+        if (!Double.isNaN(dewPointK) && coldK < dewPointK + DEW_POINT_MARGIN_K) {
+            warnings = add(warnings, Warning.Code.CONDENSATION_RISK, format(
+                    "the cold face at %.1f °C is less than %.0f K above the ambient dew point %.1f °C: seal or purge it",
+                    Units.celsiusFromKelvin(coldK), DEW_POINT_MARGIN_K, Units.celsiusFromKelvin(dewPointK)));
+        }
+        return warnings == null ? List.of() : warnings;
+    }
+
+    private static List<Warning> add(List<Warning> warnings, Warning.Code code, String sentence) {
+        List<Warning> list = warnings == null ? new ArrayList<>(2) : warnings;
+        list.add(new Warning(code, sentence));
+        return list;
+    }
+
+    private static String format(String pattern, Object... args) {
+        return String.format(Locale.ROOT, pattern, args);
+    }
+}
