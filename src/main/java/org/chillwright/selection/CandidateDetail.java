@@ -13,7 +13,7 @@ import org.chillwright.physics.Solved;
  *                               NaN when no heat sink can (or in sizing mode, where the sink is an output)
  */
 public record CandidateDetail(ModuleSpec module, int seriesCount, int parallelCount, OperatingPoint point,
-                              PerformanceCurves curves, double sinkForMoreMarginKPerW) {
+                              CaseCurves curves, double sinkForMoreMarginKPerW) {
 
     /** The extra margin the heat-sink hint aims for, K (the ask; a common design step). */
     public static final double MORE_MARGIN_K = 5;

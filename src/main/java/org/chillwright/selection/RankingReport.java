@@ -193,7 +193,12 @@ public final class RankingReport {
         t.moveTo(left, bottom);
         t.lineTo(left, bottom + plotH);
         t.stroke();
-        var font = com.lowagie.text.pdf.BaseFont.createFont();
+        com.lowagie.text.pdf.BaseFont font;
+        try {
+            font = com.lowagie.text.pdf.BaseFont.createFont();
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException("the built-in Helvetica font could not be loaded", e);
+        }
         t.beginText();
         t.setFontAndSize(font, 7);
         t.showTextAligned(Element.ALIGN_CENTER, "current (A), 0 to " + fmt(maxX, 2), left + plotW / 2, 6, 0);

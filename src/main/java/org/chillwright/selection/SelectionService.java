@@ -69,7 +69,7 @@ public class SelectionService {
     public CandidateDetail detail(CaseSpec spec, long moduleId, int seriesCount, int parallelCount) {
         Check.within("seriesCount", seriesCount, 1, RankingCase.MAX_MODULES);
         Check.within("parallelCount", parallelCount, 1, RankingCase.MAX_MODULES);
-        var module = catalog.find(moduleId);
+        var module = catalog.get(moduleId);
         var rankingCase = spec.rankingCase();
         var c = rankingCase.solverCase();
         var array = new ModuleArray(module.parameters(), seriesCount, parallelCount);
@@ -79,7 +79,7 @@ public class SelectionService {
         double ratedImaxA = module.ratedImaxA() * parallelCount;
         double gridTopA = Double.isFinite(ratedImaxA) ? ratedImaxA
                 : array.equivalent().maxCoolingCurrentA(c.coldSideAtLoadK());
-        var curves = PerformanceCurves.of(array.equivalent(), c, hotSideK, gridTopA);
+        var curves = CaseCurves.of(array.equivalent(), c, hotSideK, gridTopA);
         double sinkHint = point instanceof Solved solved && !rankingCase.sizesTheSink()
                 ? sinkForMargin(array, c, limits, solved.marginK() + CandidateDetail.MORE_MARGIN_K) : Double.NaN;
         return new CandidateDetail(module, seriesCount, parallelCount, point, curves, sinkHint);

@@ -7,6 +7,11 @@ import java.util.regex.Pattern;
 import org.chillwright.catalog.Lifecycle;
 import org.chillwright.selection.CandidateDetail;
 import org.chillwright.selection.Objective;
+import org.chillwright.selection.RankingCsv;
+import org.chillwright.selection.RankingReport;
+import org.springframework.http.HttpHeaders;
+import org.springframework.http.MediaType;
+import org.springframework.http.ResponseEntity;
 import org.chillwright.selection.SelectionService;
 import org.chillwright.web.InvalidRequestException;
 import org.chillwright.web.PowerUnit;
@@ -31,10 +36,15 @@ class SelectionPageController {
     static final int MAX_COMPARED = 4;
     private static final Pattern DESIGN = Pattern.compile("(\\d+):(\\d)x(\\d)");
 
-    private final SelectionService selection;
+    /** Candidates whose curves the PDF report draws. */
+    static final int REPORT_CURVES = 3;
 
-    SelectionPageController(SelectionService selection) {
+    private final SelectionService selection;
+    private final java.time.Clock clock;
+
+    SelectionPageController(SelectionService selection, java.time.Clock clock) {
         this.selection = selection;
+        this.clock = clock;
     }
 
     @ModelAttribute
@@ -88,6 +98,38 @@ class SelectionPageController {
         model.addAttribute("query", form.toQuery());
         model.addAttribute("view", new CaseView(form));
         return "cases/ranking";
+    }
+
+    @GetMapping(value = "/rank.csv", produces = "text/csv")
+    ResponseEntity<String> rankingCsv(@Valid @ModelAttribute("caseForm") CaseForm form, BindingResult errors) {
+        requireValid(errors);
+        return ResponseEntity.ok()
+                .header(HttpHeaders.CONTENT_DISPOSITION, "attachment; filename=\"chillwright-ranking.csv\"")
+                .contentType(new MediaType("text", "csv", java.nio.charset.StandardCharsets.UTF_8))
+                .body(RankingCsv.of(selection.rank(form.toSpec())));
+    }
+
+    @GetMapping(value = "/report.pdf", produces = MediaType.APPLICATION_PDF_VALUE)
+    ResponseEntity<byte[]> report(@Valid @ModelAttribute("caseForm") CaseForm form, BindingResult errors) {
+        requireValid(errors);
+        var spec = form.toSpec();
+        var result = selection.rank(spec);
+        var top = result.candidates().stream().limit(REPORT_CURVES)
+                .map(row -> selection.detail(spec, row.design().moduleId(), row.design().seriesCount(),
+                        row.design().parallelCount()))
+                .toList();
+        byte[] pdf = RankingReport.of(result, new CaseView(form).lines(), top, clock.instant());
+        return ResponseEntity.ok()
+                .header(HttpHeaders.CONTENT_DISPOSITION, "attachment; filename=\"chillwright-report.pdf\"")
+                .contentType(MediaType.APPLICATION_PDF).body(pdf);
+    }
+
+    /** Downloads have no form to re-render: bad input is a 400 naming the fields. */
+    private static void requireValid(BindingResult errors) {
+        if (errors.hasErrors()) {
+            throw new InvalidRequestException(errors.getFieldErrors().stream()
+                    .map(e -> new org.chillwright.web.FieldProblem(e.getField(), message(e))).toList());
+        }
     }
 
     @GetMapping("/candidate")

@@ -18,7 +18,7 @@ import org.chillwright.physics.OperatingPointSolver;
  * @param fixedDeltaTK    the fixed temperature differences, K
  * @param coolingAtDeltaW Qc at each fixed difference with the hot face at the design's hot side, W
  */
-public record PerformanceCurves(double[] currentA, double[] coolingW, double[] cop, double[] voltageV,
+public record CaseCurves(double[] currentA, double[] coolingW, double[] cop, double[] voltageV,
                                 double[] fixedDeltaTK, double[][] coolingAtDeltaW) {
 
     static final int POINTS = 61;
@@ -31,7 +31,7 @@ public record PerformanceCurves(double[] currentA, double[] coolingW, double[] c
      * @param hotSideK    the hot face for the fixed-ΔT family, K (the design's solved hot side)
      * @param maxCurrentA the right end of the grid, A (e.g. the rated Imax of the array)
      */
-    static PerformanceCurves of(ModuleParameters equivalent, CoolingCase c, double hotSideK, double maxCurrentA) {
+    static CaseCurves of(ModuleParameters equivalent, CoolingCase c, double hotSideK, double maxCurrentA) {
         double s = equivalent.seebeckVPerK();
         double r = equivalent.resistanceOhm();
         double k = equivalent.conductanceWPerK();
@@ -60,7 +60,7 @@ public record PerformanceCurves(double[] currentA, double[] coolingW, double[] c
                 family[f][n] = equivalent.coldSideHeatW(i, hotSideK - DELTA_T_FAMILY_K[f], hotSideK);
             }
         }
-        return new PerformanceCurves(current, cooling, cop, voltage, DELTA_T_FAMILY_K.clone(), family);
+        return new CaseCurves(current, cooling, cop, voltage, DELTA_T_FAMILY_K.clone(), family);
     }
 
     /** The curves as lists with nulls for missing values, for JSON. */
