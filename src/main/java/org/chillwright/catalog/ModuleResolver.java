@@ -17,6 +17,12 @@ import org.springframework.stereotype.Service;
 @Service
 public class ModuleResolver {
 
+    private final CatalogService catalog;
+
+    ModuleResolver(CatalogService catalog) {
+        this.catalog = catalog;
+    }
+
     /**
      * @param field the request field holding the module, e.g. {@code module} or {@code coldStage}; bad
      *              fields are named below it ({@code module.imaxA})
@@ -28,6 +34,11 @@ public class ModuleResolver {
         var shape = input.shape().orElseThrow(() -> new InvalidRequestException(field,
                 "give exactly one of: ratings (imaxA, vmaxV, dtmaxK, hotSideC), parameters (seebeckVPerK, "
                         + "resistanceOhm, conductanceWPerK), construction (couples, legAreaMm2, ...) or moduleId"));
+        if (shape == ModuleInput.Shape.CATALOG) {
+            var spec = catalog.find(input.moduleId()).orElseThrow(() -> new InvalidRequestException(
+                    field + ".moduleId", "no catalog module with id " + input.moduleId()));
+            return new ResolvedModule(spec.parameters(), Optional.ofNullable(spec.ratings()), spec.maxHotSideK());
+        }
         try {
             return resolve(input, shape, field);
         } catch (InvalidQuantityException e) {
@@ -44,8 +55,7 @@ public class ModuleResolver {
                     required(input.conductanceWPerK(), field, "conductanceWPerK")), Optional.empty(), OptionalDouble.empty());
             case CONSTRUCTION -> new ResolvedModule(construction(input, field).toParameters(), Optional.empty(),
                     OptionalDouble.empty());
-            case CATALOG -> throw new InvalidRequestException(field + ".moduleId",
-                    "catalog entries are not available yet");
+            case CATALOG -> throw new IllegalStateException("catalog modules are resolved above");
         };
     }
 

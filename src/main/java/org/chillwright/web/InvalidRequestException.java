@@ -3,6 +3,7 @@ package org.chillwright.web;
 import java.util.List;
 
 /** Bad input found after binding (cross-field rules, physics limits): answered with 400 naming each field. */
+@org.springframework.web.bind.annotation.ResponseStatus(org.springframework.http.HttpStatus.BAD_REQUEST)
 public class InvalidRequestException extends RuntimeException {
 
     private final transient List<FieldProblem> problems;

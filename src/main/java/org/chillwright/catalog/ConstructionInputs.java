@@ -1,0 +1,28 @@
+package org.chillwright.catalog;
+
+import org.chillwright.physics.LegConstruction;
+import org.chillwright.physics.Units;
+
+/**
+ * A module described by its couples, leg geometry (mm, mm²) and leg materials (SI), as in the
+ * module JSON of DESIGN.md. Wrapper types so that missing input can be named.
+ *
+ * @param legAreaNMm2             optional: the n-leg area when it differs from the p-leg area
+ * @param contactResistivityOhmM2 optional: electrical contact resistance per leg end, 0 when absent
+ */
+public record ConstructionInputs(Integer couples, Double legAreaMm2, Double legAreaNMm2, Double legLengthMm,
+                                 Double seebeckPVPerK, Double seebeckNVPerK,
+                                 Double resistivityPOhmM, Double resistivityNOhmM,
+                                 Double conductivityPWPerMK, Double conductivityNWPerMK,
+                                 Double contactResistivityOhmM2) {
+
+    /** The construction for the physics engine; call only on checked inputs. */
+    public LegConstruction toLegConstruction() {
+        double areaPM2 = Units.squareMetresFromSquareMillimetres(legAreaMm2);
+        double areaNM2 = legAreaNMm2 == null ? areaPM2 : Units.squareMetresFromSquareMillimetres(legAreaNMm2);
+        return new LegConstruction(couples, areaPM2, areaNM2, Units.metresFromMillimetres(legLengthMm),
+                seebeckPVPerK, seebeckNVPerK, resistivityPOhmM, resistivityNOhmM,
+                conductivityPWPerMK, conductivityNWPerMK,
+                contactResistivityOhmM2 == null ? 0.0 : contactResistivityOhmM2);
+    }
+}

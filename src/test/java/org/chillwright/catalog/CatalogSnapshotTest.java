@@ -1,0 +1,47 @@
+package org.chillwright.catalog;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.util.UUID;
+import org.junit.jupiter.api.Test;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+
+/** The solver snapshot follows every committed change and leaves archived modules out. */
+@SpringBootTest
+class CatalogSnapshotTest {
+
+    @Autowired
+    CatalogService catalog;
+
+    @Test
+    void newModuleAppearsWithItsDerivedParametersAndANewRevision() {
+        long before = catalog.snapshot().revision();
+        var module = catalog.create(CatalogFixtures.rated("Snapshot Co " + UUID.randomUUID(), "S-1"), "tester");
+
+        var snapshot = catalog.snapshot();
+        int i = snapshot.indexOf(module.id());
+        assertThat(snapshot.revision()).isGreaterThan(before);
+        assertThat(i).isNotNegative();
+        assertThat(snapshot.parameters(i)).isEqualTo(module.parameters());
+        assertThat(snapshot.imaxA(i)).isEqualTo(6.0);
+        assertThat(snapshot.unitPriceAt(i, 100)).isEqualTo(9.85);
+        assertThat(snapshot.unitPriceAt(i, 99)).isEqualTo(12.4);
+    }
+
+    @Test
+    void archivedModuleLeavesTheSnapshot() {
+        var module = catalog.create(CatalogFixtures.rated("Snapshot Co " + UUID.randomUUID(), "S-2"), "tester");
+        catalog.archive(module.id(), "tester");
+
+        assertThat(catalog.snapshot().indexOf(module.id())).isEqualTo(-1);
+        assertThat(catalog.find(module.id())).hasValueSatisfying(m -> assertThat(m.archived()).isTrue());
+    }
+
+    @Test
+    void unchangedSnapshotIsReusedNotRebuilt() {
+        catalog.create(CatalogFixtures.rated("Snapshot Co " + UUID.randomUUID(), "S-3"), "tester");
+
+        assertThat(catalog.snapshot()).isSameAs(catalog.snapshot());
+    }
+}

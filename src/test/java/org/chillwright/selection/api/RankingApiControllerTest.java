@@ -1,0 +1,103 @@
+package org.chillwright.selection.api;
+
+import static org.hamcrest.Matchers.closeTo;
+import static org.hamcrest.Matchers.hasItem;
+import static org.hamcrest.Matchers.not;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
+
+import org.chillwright.catalog.CatalogService;
+import org.chillwright.selection.TestCatalog;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.springframework.http.MediaType;
+import org.springframework.test.web.servlet.MockMvc;
+import org.springframework.test.web.servlet.ResultActions;
+
+/** {@code POST /api/v1/rankings} on the small catalog of {@link TestCatalog}. */
+@SpringBootTest
+@AutoConfigureMockMvc
+class RankingApiControllerTest {
+
+    /** check-cases.json S10: 10 W at 5 °C, 25 °C ambient, sink 0.3 K/W, interfaces 0.1 (cold) / 0.05 (hot) K/W. */
+    private static final String S10 = "\"objectC\":5,\"ambientC\":25,\"heatLoadW\":10,\"sinkResistanceKPerW\":0.3,"
+            + "\"coldInterfaceKPerW\":0.1,\"hotInterfaceKPerW\":0.05";
+
+    @Autowired
+    MockMvc mvc;
+    @Autowired
+    CatalogService catalog;
+
+    @BeforeEach
+    void catalog() {
+        TestCatalog.ensure(catalog);
+    }
+
+    private ResultActions rank(String json) throws Exception {
+        return mvc.perform(post("/api/v1/rankings").contentType(MediaType.APPLICATION_JSON).content(json));
+    }
+
+    @Test
+    void bestSingleModuleReproducesCheckCaseS10() throws Exception {
+        // TMA-1 derives to TM-A (S03 round trip); S10 by brute force: I 1.961596365 A, COP 0.8716659285
+        rank("{" + S10 + ",\"maxModules\":1,\"supplier\":\"" + TestCatalog.SUPPLIER_A + "\"}")
+                .andExpect(status().isOk())
+                .andExpect(jsonPath("$.candidates[0].partNumber").value("TMA-1"))
+                .andExpect(jsonPath("$.candidates[0].rank").value(1))
+                .andExpect(jsonPath("$.candidates[0].currentA").value(closeTo(1.961596365, 1e-5), Double.class))
+                .andExpect(jsonPath("$.candidates[0].cop").value(closeTo(0.8716659285, 1e-5), Double.class))
+                .andExpect(jsonPath("$.candidates[0].unitPrice").value(closeTo(18.0, 1e-9), Double.class))
+                .andExpect(jsonPath("$.evaluated").value(1))
+                .andExpect(jsonPath("$.elapsedMs").isNumber());
+    }
+
+    @Test
+    void modulesThatCannotDoItAreListedWithTheirReason() throws Exception {
+        rank("{" + S10 + ",\"maxModules\":1}")
+                .andExpect(status().isOk())
+                .andExpect(jsonPath("$.infeasible[?(@.partNumber=='TMA-TINY')].reason.code").value(hasItem("LOAD_ABOVE_CAPACITY")))
+                .andExpect(jsonPath("$.infeasible[?(@.partNumber=='TMA-TINY')].reason.message").isNotEmpty());
+    }
+
+    @Test
+    void obsoleteModulesAreLeftOutUnlessAskedFor() throws Exception {
+        rank("{" + S10 + "}").andExpect(jsonPath("$.candidates[*].partNumber").value(not(hasItem("TMA-OLD"))));
+        rank("{" + S10 + ",\"lifecycles\":[\"OBSOLETE\"]}")
+                .andExpect(jsonPath("$.candidates[*].partNumber").value(hasItem("TMA-OLD")));
+    }
+
+    @Test
+    void arraysAreRankedWithTheirSplit() throws Exception {
+        rank("{" + S10 + ",\"maxModules\":2,\"supplier\":\"" + TestCatalog.SUPPLIER_A + "\",\"limit\":10}")
+                .andExpect(status().isOk())
+                .andExpect(jsonPath("$.evaluated").value(3))
+                .andExpect(jsonPath("$.candidates[0].perModule.heatLoadW").value(closeTo(5.0, 1e-9), Double.class));
+    }
+
+    @Test
+    void sizingModeReportsTheSinkNeeded() throws Exception {
+        rank("{\"objectC\":5,\"ambientC\":25,\"heatLoadW\":10,\"sinkRiseK\":8,\"maxModules\":1}")
+                .andExpect(status().isOk())
+                .andExpect(jsonPath("$.candidates[0].requiredSinkKPerW").isNumber());
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @CsvSource(delimiter = '|', value = {
+        "no heat sink at all      | {\"objectC\":5,\"ambientC\":25,\"heatLoadW\":10} | sinkResistanceKPerW",
+        "sink given twice         | {\"objectC\":5,\"ambientC\":25,\"heatLoadW\":10,\"sinkResistanceKPerW\":0.3,\"sinkRiseK\":5} | sinkRiseK",
+        "too many modules         | {" + S10 + ",\"maxModules\":9} | maxModules",
+        "unknown objective        | {" + S10 + ",\"objective\":\"FASTEST\"} | objective",
+        "Imax fraction above one  | {" + S10 + ",\"maxFractionOfImax\":1.5} | maxFractionOfImax",
+        "missing load             | {\"objectC\":5,\"ambientC\":25,\"sinkResistanceKPerW\":0.3} | heatLoadW",
+    })
+    void badRankingRequestIsA400NamingTheField(String what, String json, String field) throws Exception {
+        rank(json).andExpect(status().isBadRequest())
+                .andExpect(jsonPath("$.errors[?(@.field=='" + field + "')]").exists());
+    }
+}
