@@ -26,10 +26,19 @@
         return { x: xs, marks: marks, at: -1 };
     }
 
+    // a line gets a value at the inserted operating-point current too (linear between its neighbours),
+    // so the marker does not cut a gap into it
     function spliced(values, at) {
         var copy = values.slice();
         if (at >= 0) {
-            copy.splice(at, 0, null);
+            var before = at > 0 ? values[at - 1] : null;
+            var after = at < values.length ? values[at] : null;
+            var value = null;
+            if (before !== null && after !== null) {
+                var x0 = current[at - 1], x1 = current[at];
+                value = before + (after - before) * (point.currentA - x0) / (x1 - x0);
+            }
+            copy.splice(at, 0, value);
         }
         return copy;
     }
