@@ -78,7 +78,8 @@ class SelectionPagesTest {
     @Test
     void mistypedNumberComesBackBesideItsFieldAsTyped() throws Exception {
         mvc.perform(s10("/cases/rank", "ambientTemperature", "25,5")).andExpect(status().isOk())
-                .andExpect(content().string(allOf(containsString("enter a number"), containsString("value=\"25,5\""))));
+                .andExpect(content().string(allOf(containsString("enter a number"),
+                        containsString("name=\"ambientTemperature\" value=\"25,5\" aria-describedby=\"ambientTemperature-hint\" aria-invalid=\"true\""))));
     }
 
     @Test
