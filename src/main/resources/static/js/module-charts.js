@@ -9,7 +9,8 @@
     var data = JSON.parse(source.textContent);
     var colours = ["#1f5f7a", "#2f6b3a", "#a67c00", "#a63d26", "#6b3f8a", "#55606d", "#0f8a8a"];
 
-    function draw(targetId, key, yLabel) {
+    // at ΔT = 0 the COP grows without bound as the current falls, which would flatten the other curves
+    function draw(targetId, key, yLabel, skipZeroDeltaT) {
         var target = document.getElementById(targetId);
         if (!target) {
             return;
@@ -17,6 +18,9 @@
         var series = [{ label: "Current (A)" }];
         var columns = [data.currentA];
         data.curves.forEach(function (curve, i) {
+            if (skipZeroDeltaT && curve.deltaTK === 0) {
+                return;
+            }
             series.push({ label: "ΔT = " + curve.deltaTK + " K", stroke: colours[i % colours.length], width: 2 });
             columns.push(curve[key]);
         });
@@ -30,6 +34,6 @@
         }, columns, target);
     }
 
-    draw("qc-chart", "coldSideHeatW", "Qc (W)");
-    draw("cop-chart", "cop", "COP");
+    draw("qc-chart", "coldSideHeatW", "Qc (W)", false);
+    draw("cop-chart", "cop", "COP", true);
 })();
