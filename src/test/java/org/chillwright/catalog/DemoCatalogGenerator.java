@@ -62,7 +62,7 @@ public final class DemoCatalogGenerator {
         return out.toString();
     }
 
-    static List<ModuleDefinition> modules() {
+    public static List<ModuleDefinition> modules() {
         var random = new Random(SEED);
         var modules = new ArrayList<ModuleDefinition>();
         for (Supplier supplier : SUPPLIERS) {
