@@ -1,5 +1,6 @@
 package org.chillwright.catalog.web;
 
+import static org.assertj.core.api.Assertions.assertThat;
 import static org.hamcrest.Matchers.containsString;
 import static org.hamcrest.Matchers.endsWith;
 import static org.hamcrest.Matchers.not;
@@ -23,6 +24,7 @@ import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.springframework.mock.web.MockHttpSession;
 import org.springframework.mock.web.MockMultipartFile;
 import org.springframework.test.web.servlet.MockMvc;
 import org.springframework.test.web.servlet.request.RequestPostProcessor;
@@ -46,6 +48,16 @@ class CatalogPagesTest {
 
     private static RequestPostProcessor engineer() {
         return user("page-engineer").roles("ENGINEER");
+    }
+
+    private long stored() {
+        return catalog.search(ModuleQuery.text(supplier)).total();
+    }
+
+    private org.springframework.test.web.servlet.ResultActions upload(String csv, MockHttpSession session)
+            throws Exception {
+        return mvc.perform(multipart("/catalog/import").file(new MockMultipartFile("file", "upload.csv", "text/csv",
+                csv.getBytes(StandardCharsets.UTF_8))).session(session).with(engineer()).with(csrf()));
     }
 
     @Test
@@ -111,7 +123,7 @@ class CatalogPagesTest {
                         .param("hotSideC", "25").param("lifecycle", "ACTIVE"))
                 .andExpect(status().isFound())
                 .andExpect(redirectedUrlPattern("/catalog/*"));
-        org.assertj.core.api.Assertions.assertThat(catalog.search(ModuleQuery.text(supplier)).total()).isEqualTo(1);
+        assertThat(stored()).isEqualTo(1);
     }
 
     @Test
@@ -122,7 +134,7 @@ class CatalogPagesTest {
                 .andExpect(status().isOk())
                 .andExpect(content().string(containsString("id=\"imaxA-error\"")))
                 .andExpect(content().string(containsString("without a unit")));
-        org.assertj.core.api.Assertions.assertThat(catalog.search(ModuleQuery.text(supplier)).total()).isZero();
+        assertThat(stored()).isZero();
     }
 
     @Test
@@ -146,20 +158,18 @@ class CatalogPagesTest {
     void importPreviewListsRowErrorsAndStoresNothing() throws Exception {
         String csv = "supplier,partNumber,imaxA,vmaxV,qmaxW,dtmaxK,hotSideC\n" + supplier + ",ID-1,6,15.4,52,68,25\n"
                 + supplier + ",ID-2,6,15.4,52,-68,25\n";
-        mvc.perform(multipart("/catalog/import").file(new MockMultipartFile("file", "bad.csv", "text/csv",
-                        csv.getBytes(StandardCharsets.UTF_8))).with(engineer()).with(csrf()))
+        upload(csv, new MockHttpSession())
                 .andExpect(status().isOk())
                 .andExpect(content().string(containsString("nothing was stored")))
                 .andExpect(content().string(containsString("<td>dtmaxK</td>")));
-        org.assertj.core.api.Assertions.assertThat(catalog.search(ModuleQuery.text(supplier)).total()).isZero();
+        assertThat(stored()).isZero();
     }
 
     @Test
     void importPreviewThenApplyStoresTheRows() throws Exception {
         String csv = "supplier,partNumber,imaxA,vmaxV,qmaxW,dtmaxK,hotSideC\n" + supplier + ",ID-1,6,15.4,52,68,25\n";
-        var session = new org.springframework.mock.web.MockHttpSession();
-        var preview = mvc.perform(multipart("/catalog/import").file(new MockMultipartFile("file", "good.csv",
-                        "text/csv", csv.getBytes(StandardCharsets.UTF_8))).session(session).with(engineer()).with(csrf()))
+        var session = new MockHttpSession();
+        var preview = upload(csv, session)
                 .andExpect(content().string(containsString("1 new, 0 updated, 0 unchanged")))
                 .andReturn().getResponse().getContentAsString();
         String token = preview.replaceAll("(?s).*name=\"token\" value=\"([^\"]+)\".*", "$1");
@@ -167,7 +177,7 @@ class CatalogPagesTest {
         mvc.perform(post("/catalog/import/apply").param("token", token).session(session).with(engineer()).with(csrf()))
                 .andExpect(status().isOk())
                 .andExpect(content().string(containsString("Imported")));
-        org.assertj.core.api.Assertions.assertThat(catalog.search(ModuleQuery.text(supplier)).total()).isEqualTo(1);
+        assertThat(stored()).isEqualTo(1);
     }
 
     @Test
