@@ -33,4 +33,16 @@ public record ImportReport(List<RowChange> changes, List<CsvRowError> errors, bo
     public long count(Kind kind) {
         return changes.stream().filter(c -> c.kind() == kind).count();
     }
+
+    public long newCount() {
+        return count(Kind.NEW);
+    }
+
+    public long updatedCount() {
+        return count(Kind.UPDATED);
+    }
+
+    public long unchangedCount() {
+        return count(Kind.UNCHANGED);
+    }
 }

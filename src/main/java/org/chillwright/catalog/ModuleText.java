@@ -284,7 +284,7 @@ public final class ModuleText {
     }
 
     /** Why a text is not a plain decimal number, or null when it is one. */
-    static String numberProblem(String text) {
+    public static String numberProblem(String text) {
         if (DECIMAL.matcher(text).matches()) {
             return Double.isFinite(Double.parseDouble(text)) ? null : "must be a finite number, was '" + text + "'";
         }

@@ -146,7 +146,7 @@ class CatalogCsvImportTest {
     void rowForAStoredModuleUpdatesOnlyTheColumnsTheFileHas() {
         var module = catalog.create(CatalogFixtures.rated(supplier, "GW-1"), "csv-tester");
 
-        var report = importing(HEADER + row("GW-1", "6.5,15.4,52,68,25"));
+        var report = importing(HEADER + row("GW-1", "6.5,15.4,56,68,25"));
 
         assertThat(report.changes()).singleElement().satisfies(c -> {
             assertThat(c.kind()).isEqualTo(ImportReport.Kind.UPDATED);

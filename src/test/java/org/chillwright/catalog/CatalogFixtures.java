@@ -10,10 +10,10 @@ public final class CatalogFixtures {
     private CatalogFixtures() {
     }
 
-    /** A mid-size rated module: 6 A, 15.4 V, 52 W, 68 K at 25 °C, two price breaks in EUR. */
+    /** A mid-size rated module: 6 A, 15.4 V, 56 W, 68 K at 25 °C (consistency 0.99), two price breaks in EUR. */
     public static ModuleDefinition rated(String supplier, String partNumber) {
         return new ModuleDefinition(supplier, partNumber, "Invented 127-couple test module",
-                new RatedInputs(6.0, 15.4, 52.0, 68.0, 25.0, RatingsMethod.IMAX_VMAX_DTMAX, TestAtmosphere.DRY_NITROGEN),
+                new RatedInputs(6.0, 15.4, 56.0, 68.0, 25.0, RatingsMethod.IMAX_VMAX_DTMAX, TestAtmosphere.DRY_NITROGEN),
                 null, 40.0, 40.0, 3.9, 80.0, "EUR",
                 List.of(new PriceBreak(1, new BigDecimal("12.40")), new PriceBreak(100, new BigDecimal("9.85"))),
                 21, 1, Lifecycle.ACTIVE, true, true, "rev C", null);
