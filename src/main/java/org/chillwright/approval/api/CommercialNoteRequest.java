@@ -6,7 +6,7 @@ import jakarta.validation.constraints.Size;
 import org.chillwright.approval.Text;
 
 /** {@code PUT /api/v1/lists/{id}/entries/{entryId}/commercial-note}: second source, price agreement, lead-time risk. */
-record CommercialNoteRequest(
+public record CommercialNoteRequest(
         @NotNull @Size(max = Text.NOTE_MAX) @Pattern(regexp = Text.LINES, message = Text.BINARY_MESSAGE) String commercialNote,
         Long version) {
 }

@@ -12,7 +12,7 @@ import org.chillwright.approval.Text;
  * {@code POST /api/v1/lists/{id}/entries/{entryId}/transitions}. {@code version} (optional) is the
  * entry version acted on; {@code replacedByEntryId} (optional) names the successor of an entry made OBSOLETE.
  */
-record TransitionRequest(
+public record TransitionRequest(
         @NotNull EntryState to,
         @NotBlank @Size(max = Text.NOTE_MAX) @Pattern(regexp = Text.LINES, message = Text.BINARY_MESSAGE) String reason,
         Long version,
