@@ -27,11 +27,14 @@ public class AccountService implements UserDetailsService {
     private final UserAccountRepository accounts;
     private final PasswordEncoder passwordEncoder;
     private final Clock clock;
+    private final SignedInSessions sessions;
 
-    AccountService(UserAccountRepository accounts, PasswordEncoder passwordEncoder, Clock clock) {
+    AccountService(UserAccountRepository accounts, PasswordEncoder passwordEncoder, Clock clock,
+            SignedInSessions sessions) {
         this.accounts = accounts;
         this.passwordEncoder = passwordEncoder;
         this.clock = clock;
+        this.sessions = sessions;
     }
 
     /**
@@ -84,7 +87,11 @@ public class AccountService implements UserDetailsService {
             throw new ConflictException("enabled", "you cannot disable your own account");
         }
         account.setEnabled(enabled);
-        return AccountView.of(accounts.saveAndFlush(account));
+        var saved = AccountView.of(accounts.saveAndFlush(account));
+        if (!enabled) {
+            sessions.endAllOf(account.getUsername());
+        }
+        return saved;
     }
 
     /** An administrator sets a new password for someone who lost theirs. */
@@ -93,6 +100,7 @@ public class AccountService implements UserDetailsService {
         var account = find(id);
         account.setPasswordHash(passwordEncoder.encode(rawPassword));
         accounts.saveAndFlush(account);
+        sessions.endAllOf(account.getUsername());
     }
 
     /**
