@@ -8,14 +8,9 @@ import java.net.http.HttpClient;
 import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
 import java.nio.charset.StandardCharsets;
-import java.util.ArrayList;
 import java.util.Base64;
 import java.util.List;
-import java.util.concurrent.CyclicBarrier;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
-import java.util.concurrent.TimeUnit;
+import java.util.concurrent.Callable;
 import java.util.regex.Pattern;
 import org.chillwright.approval.ApprovalFixtures;
 import org.chillwright.approval.TestModuleDirectory;
@@ -152,24 +147,9 @@ class TwoInstancesIT {
         var qualifying = json.readTree(api(one, "POST", entryPath, "{\"to\":\"QUALIFYING\",\"reason\":\"in test\"}").body());
         long version = qualifying.get("version").asLong();
 
-        var barrier = new CyclicBarrier(2);
-        ExecutorService pool = Executors.newFixedThreadPool(2);
-        try {
-            List<Future<Integer>> outcomes = new ArrayList<>();
-            for (String base : List.of(one, two)) {
-                outcomes.add(pool.submit(() -> {
-                    barrier.await(10, TimeUnit.SECONDS);
-                    return api(base, "POST", entryPath, "{\"to\":\"APPROVED\",\"reason\":\"signed on " + base
-                            + "\",\"version\":" + version + "}").statusCode();
-                }));
-            }
-            var statuses = new ArrayList<Integer>();
-            for (var outcome : outcomes) {
-                statuses.add(outcome.get(30, TimeUnit.SECONDS));
-            }
-            assertThat(statuses).containsExactlyInAnyOrder(200, 409);
-        } finally {
-            pool.shutdownNow();
-        }
+        var statuses = Together.run(List.of(one, two).stream().<Callable<Integer>>map(
+                base -> () -> api(base, "POST", entryPath, "{\"to\":\"APPROVED\",\"reason\":\"signed on " + base
+                        + "\",\"version\":" + version + "}").statusCode()).toList());
+        assertThat(statuses).containsExactlyInAnyOrder(200, 409);
     }
 }

@@ -9,15 +9,12 @@ import java.net.http.HttpClient;
 import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
 import java.nio.charset.StandardCharsets;
-import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Base64;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.concurrent.Callable;
-import java.util.concurrent.CyclicBarrier;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
-import java.util.concurrent.TimeUnit;
+import org.chillwright.Together;
 import org.chillwright.account.AccountService;
 import org.chillwright.account.Role;
 import org.junit.jupiter.api.Test;
@@ -44,28 +41,10 @@ class ConcurrentTransitionTest {
         String basic = "Basic " + Base64.getEncoder().encodeToString(
                 (approver + ":" + ApprovalFixtures.PASSWORD).getBytes(StandardCharsets.UTF_8));
         var http = HttpClient.newHttpClient();
-        var barrier = new CyclicBarrier(bodies.length);
-        var pool = Executors.newFixedThreadPool(bodies.length);
-        try {
-            var futures = new ArrayList<Future<Integer>>();
-            for (String body : bodies) {
-                Callable<Integer> call = () -> {
-                    barrier.await(10, TimeUnit.SECONDS);
-                    var request = HttpRequest.newBuilder(URI.create("http://localhost:" + port + path))
-                            .header("Authorization", basic).header("Content-Type", "application/json")
-                            .POST(HttpRequest.BodyPublishers.ofString(body)).build();
-                    return http.send(request, HttpResponse.BodyHandlers.ofString()).statusCode();
-                };
-                futures.add(pool.submit(call));
-            }
-            var statuses = new ArrayList<Integer>();
-            for (var future : futures) {
-                statuses.add(future.get(30, TimeUnit.SECONDS));
-            }
-            return statuses;
-        } finally {
-            pool.shutdownNow();
-        }
+        return Together.run(Arrays.stream(bodies).<Callable<Integer>>map(body -> () -> http.send(
+                HttpRequest.newBuilder(URI.create("http://localhost:" + port + path)).header("Authorization", basic)
+                        .header("Content-Type", "application/json").POST(HttpRequest.BodyPublishers.ofString(body))
+                        .build(), HttpResponse.BodyHandlers.ofString()).statusCode()).toList());
     }
 
     @Test
