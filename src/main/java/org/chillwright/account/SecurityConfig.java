@@ -10,7 +10,13 @@ import org.springframework.context.annotation.Bean;
 import org.springframework.context.annotation.Configuration;
 import org.springframework.core.annotation.Order;
 import org.springframework.http.HttpStatus;
+import jakarta.servlet.http.HttpServletResponse;
+import java.io.IOException;
+import org.springframework.security.authentication.AuthenticationManager;
+import org.springframework.security.authentication.ProviderManager;
+import org.springframework.security.authentication.dao.DaoAuthenticationProvider;
 import org.springframework.security.config.Customizer;
+import org.springframework.security.core.AuthenticationException;
 import org.springframework.security.config.annotation.method.configuration.EnableMethodSecurity;
 import org.springframework.security.config.annotation.web.builders.HttpSecurity;
 import org.springframework.security.config.annotation.web.configurers.AbstractHttpConfigurer;
@@ -25,7 +31,8 @@ import org.springframework.security.web.access.ExceptionTranslationFilter;
  * no cookies, so there is nothing to forge); pages use form login with CSRF protection.
  * With {@code chillwright.access.open-reads} (the embedded default) computations and catalog reads
  * are open so a newcomer can try the tool at once; writes always need an account with a role,
- * checked again per method with {@code @PreAuthorize}.
+ * checked again per method with {@code @PreAuthorize}. Every sign-in, by form or by Basic, goes
+ * through the {@link LoginThrottle}.
  */
 @Configuration
 @EnableMethodSecurity
@@ -56,20 +63,28 @@ class SecurityConfig {
         return PasswordEncoderFactories.createDelegatingPasswordEncoder(); // bcrypt by default
     }
 
+    /** The one way in for both chains: the throttle first, then the bcrypt check against the accounts. */
+    @Bean
+    AuthenticationManager authenticationManager(AccountService accounts, PasswordEncoder passwordEncoder,
+            LoginThrottle throttle) {
+        var passwords = new DaoAuthenticationProvider(accounts);
+        passwords.setPasswordEncoder(passwordEncoder);
+        return new ProviderManager(new ThrottledAuthenticationProvider(passwords, throttle));
+    }
+
     @Bean
     @Order(1)
-    SecurityFilterChain apiChain(HttpSecurity http, ProblemWriter problems) throws Exception {
+    SecurityFilterChain apiChain(HttpSecurity http, ProblemWriter problems, AuthenticationManager authentication)
+            throws Exception {
         http.securityMatcher("/api/**")
+                .authenticationManager(authentication)
                 .addFilterBefore(new RequestLogFilter(), ExceptionTranslationFilter.class)
                 .csrf(AbstractHttpConfigurer::disable)
                 .sessionManagement(s -> s.sessionCreationPolicy(SessionCreationPolicy.STATELESS))
-                .httpBasic(basic -> basic.authenticationEntryPoint((request, response, e) -> problems.write(
-                        response, HttpStatus.UNAUTHORIZED, "Sign-in required",
-                        "This request needs an account: send HTTP Basic credentials.")))
+                .httpBasic(basic -> basic.authenticationEntryPoint((request, response, e) -> signInRequired(
+                        problems, response, e)))
                 .exceptionHandling(e -> e
-                        .authenticationEntryPoint((request, response, ex) -> problems.write(
-                                response, HttpStatus.UNAUTHORIZED, "Sign-in required",
-                                "This request needs an account: send HTTP Basic credentials."))
+                        .authenticationEntryPoint((request, response, ex) -> signInRequired(problems, response, ex))
                         .accessDeniedHandler((request, response, ex) -> problems.write(
                                 response, HttpStatus.FORBIDDEN, "Not allowed",
                                 "Your account's roles do not allow this request.")))
@@ -83,11 +98,25 @@ class SecurityConfig {
         return http.build();
     }
 
+    private static void signInRequired(ProblemWriter problems, HttpServletResponse response, AuthenticationException e)
+            throws IOException {
+        if (e instanceof LoginThrottledException throttled) {
+            response.setHeader("Retry-After", String.valueOf(throttled.retryAfter().toSeconds()));
+            problems.write(response, HttpStatus.TOO_MANY_REQUESTS, "Too many failed sign-ins", throttled.getMessage());
+            return;
+        }
+        problems.write(response, HttpStatus.UNAUTHORIZED, "Sign-in required",
+                "This request needs an account: send HTTP Basic credentials.");
+    }
+
     @Bean
     @Order(2)
-    SecurityFilterChain pageChain(HttpSecurity http) throws Exception {
-        http.addFilterBefore(new RequestLogFilter(), ExceptionTranslationFilter.class)
-                .formLogin(form -> form.loginPage("/login").failureUrl("/login?error").permitAll())
+    SecurityFilterChain pageChain(HttpSecurity http, AuthenticationManager authentication) throws Exception {
+        http.authenticationManager(authentication)
+                .addFilterBefore(new RequestLogFilter(), ExceptionTranslationFilter.class)
+                .formLogin(form -> form.loginPage("/login").permitAll()
+                        .failureHandler((request, response, e) -> response.sendRedirect(request.getContextPath()
+                                + (e instanceof LoginThrottledException ? "/login?locked" : "/login?error"))))
                 .logout(logout -> logout.logoutSuccessUrl("/login?signedOut"))
                 .httpBasic(Customizer.withDefaults())
                 .headers(h -> h.contentSecurityPolicy(csp -> csp.policyDirectives(
@@ -96,6 +125,7 @@ class SecurityConfig {
                 .authorizeHttpRequests(auth -> {
                     auth.requestMatchers(ALWAYS_OPEN).permitAll();
                     auth.requestMatchers("/admin/**").hasRole(Role.ADMIN.name());
+                    auth.requestMatchers("/account/**").authenticated();
                     if (openReads) {
                         auth.requestMatchers(API_DOCS).permitAll();
                         auth.requestMatchers(POST, PAGE_COMPUTATIONS).permitAll();

@@ -3,6 +3,7 @@ package org.chillwright.selection;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.function.IntPredicate;
+import org.chillwright.approval.ApprovedListService;
 import org.chillwright.catalog.CatalogService;
 import org.chillwright.catalog.CatalogSnapshot;
 import org.chillwright.catalog.ModuleSpec;
@@ -22,6 +23,7 @@ import org.springframework.stereotype.Service;
 public class SelectionService {
 
     private final CatalogService catalog;
+    private final ApprovedListService lists;
     /** Heat-sink resistances are quoted to two decimals on datasheets; 1e-4 K/W is well below that. */
     private static final double SINK_RESISTANCE_ACCURACY_K_PER_W = 1e-4;
 
@@ -32,8 +34,9 @@ public class SelectionService {
     private final OperatingPointSolver solver = new OperatingPointSolver();
     private volatile Prepared prepared;
 
-    SelectionService(CatalogService catalog) {
+    SelectionService(CatalogService catalog, ApprovedListService lists) {
         this.catalog = catalog;
+        this.lists = lists;
     }
 
     /** The snapshot and its table, rebuilt only when the catalog revision moves on. */
@@ -189,6 +192,11 @@ public class SelectionService {
         }
         if (!spec.lifecycles().isEmpty()) {
             keep = keep.and(i -> spec.lifecycles().contains(snapshot.lifecycle(i)));
+        }
+        if (spec.listId() != null) {
+            // only the list's APPROVED entries take part (an unknown list is a 404)
+            var approved = new java.util.HashSet<>(lists.approvedModuleIds(spec.listId()));
+            keep = keep.and(i -> approved.contains(snapshot.id(i)));
         }
         final IntPredicate filter = keep;
         return java.util.stream.IntStream.range(0, snapshot.size()).filter(filter).toArray();

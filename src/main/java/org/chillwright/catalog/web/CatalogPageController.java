@@ -13,6 +13,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.UUID;
+import org.chillwright.approval.ApprovedListService;
 import org.chillwright.catalog.CatalogService;
 import org.chillwright.catalog.EntryRoute;
 import org.chillwright.catalog.ImportReport;
@@ -62,10 +63,12 @@ class CatalogPageController {
     }
 
     private final CatalogService catalog;
+    private final ApprovedListService lists;
     private final ObjectMapper json;
 
-    CatalogPageController(CatalogService catalog, ObjectMapper json) {
+    CatalogPageController(CatalogService catalog, ApprovedListService lists, ObjectMapper json) {
         this.catalog = catalog;
+        this.lists = lists;
         this.json = json;
     }
 
@@ -98,6 +101,7 @@ class CatalogPageController {
         model.addAttribute("module", module);
         model.addAttribute("d", module.definition());
         model.addAttribute("curvesJson", curvesJson(PerformanceCurves.of(module)));
+        model.addAttribute("placements", lists.placementsOf(id));
         return "catalog/detail";
     }
 

@@ -4,6 +4,7 @@ import jakarta.validation.Valid;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.regex.Pattern;
+import org.chillwright.approval.ApprovedListService;
 import org.chillwright.catalog.Lifecycle;
 import org.chillwright.selection.CandidateDetail;
 import org.chillwright.selection.Objective;
@@ -40,10 +41,12 @@ class SelectionPageController {
     static final int REPORT_CURVES = 3;
 
     private final SelectionService selection;
+    private final ApprovedListService lists;
     private final java.time.Clock clock;
 
-    SelectionPageController(SelectionService selection, java.time.Clock clock) {
+    SelectionPageController(SelectionService selection, ApprovedListService lists, java.time.Clock clock) {
         this.selection = selection;
+        this.lists = lists;
         this.clock = clock;
     }
 
@@ -53,6 +56,7 @@ class SelectionPageController {
         model.addAttribute("powerUnits", PowerUnit.values());
         model.addAttribute("objectives", Objective.values());
         model.addAttribute("allLifecycles", Lifecycle.values());
+        model.addAttribute("approvedLists", lists.lists());
     }
 
     @GetMapping("/new")

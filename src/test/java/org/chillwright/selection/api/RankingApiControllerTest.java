@@ -7,6 +7,9 @@ import static org.springframework.test.web.servlet.request.MockMvcRequestBuilder
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
+import org.chillwright.approval.Actor;
+import org.chillwright.approval.ApprovedListService;
+import org.chillwright.approval.EntryState;
 import org.chillwright.catalog.CatalogService;
 import org.chillwright.selection.TestCatalog;
 import org.junit.jupiter.api.BeforeEach;
@@ -33,6 +36,8 @@ class RankingApiControllerTest {
     MockMvc mvc;
     @Autowired
     CatalogService catalog;
+    @Autowired
+    ApprovedListService lists;
 
     @BeforeEach
     void catalog() {
@@ -85,6 +90,30 @@ class RankingApiControllerTest {
         rank("{\"objectC\":5,\"ambientC\":25,\"heatLoadW\":10,\"sinkRiseK\":8,\"maxModules\":1}")
                 .andExpect(status().isOk())
                 .andExpect(jsonPath("$.candidates[0].requiredSinkKPerW").isNumber());
+    }
+
+    @Test
+    void rankingRestrictedToAListConsidersOnlyItsApprovedEntries() throws Exception {
+        var engineer = new Actor("eng-ranking", java.util.Set.of(org.chillwright.account.Role.ENGINEER));
+        var approver = new Actor("approver-ranking", java.util.Set.of(org.chillwright.account.Role.APPROVER));
+        var list = lists.create("Ranking list " + System.nanoTime(), "test", engineer);
+        long half = catalog.search(org.chillwright.catalog.ModuleQuery.text("TMA-HALF")).items().get(0).id();
+        long one = catalog.search(org.chillwright.catalog.ModuleQuery.text("TMA-1")).items().get(0).id();
+        var approved = lists.propose(list.id(), half, "second source", engineer);
+        lists.transition(list.id(), approved.id(), EntryState.QUALIFYING, "datasheet reviewed", null, null, engineer);
+        lists.transition(list.id(), approved.id(), EntryState.APPROVED, "pilot build passed", null, null, approver);
+        lists.propose(list.id(), one, "still proposed, must not take part", engineer);
+
+        rank("{\"objectC\":5,\"ambientC\":25,\"heatLoadW\":4,\"sinkResistanceKPerW\":0.3,\"listId\":" + list.id() + "}")
+                .andExpect(status().isOk())
+                .andExpect(jsonPath("$.candidates[*].partNumber").value(org.hamcrest.Matchers.everyItem(
+                        org.hamcrest.Matchers.is("TMA-HALF"))))
+                .andExpect(jsonPath("$.candidates.length()").value(org.hamcrest.Matchers.greaterThan(0)));
+    }
+
+    @Test
+    void rankingOfAnUnknownListIsA404() throws Exception {
+        rank("{" + S10 + ",\"listId\":987654}").andExpect(status().isNotFound());
     }
 
     @ParameterizedTest(name = "{0}")

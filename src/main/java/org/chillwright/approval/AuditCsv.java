@@ -1,0 +1,42 @@
+package org.chillwright.approval;
+
+import java.io.IOException;
+import java.util.List;
+import java.util.Map;
+import java.util.function.Function;
+import java.util.stream.Collectors;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+
+/** A list's audit trail as CSV, one row per line of the trail, for filing with a change record. */
+final class AuditCsv {
+
+    static final String[] HEADER = {"at", "by", "entryId", "moduleId", "partNumber", "action", "from", "to", "reason"};
+
+    private AuditCsv() {
+    }
+
+    static void write(ListView list, List<AuditView> trail, Appendable out) throws IOException {
+        Map<Long, EntryView> entries = list.entries().stream().collect(Collectors.toMap(EntryView::id, Function.identity()));
+        var format = CSVFormat.DEFAULT.builder().setHeader(HEADER).setRecordSeparator("\r\n").get();
+        try (var printer = new CSVPrinter(out, format)) {
+            for (var line : trail) {
+                var entry = line.entryId() == null ? null : entries.get(line.entryId());
+                printer.printRecord(line.at(), cell(line.by()), line.entryId(),
+                        entry == null ? null : entry.moduleId(), cell(entry == null ? null : entry.partNumber()),
+                        line.action(), line.from(), line.to(), cell(line.reason()));
+            }
+        }
+    }
+
+    /**
+     * Text typed by people is quoted by the printer; a leading =, +, - or @ is also prefixed with an
+     * apostrophe so that a spreadsheet opening the file shows it instead of running it as a formula.
+     */
+    static String cell(String text) {
+        if (text != null && !text.isEmpty() && "=+-@\t\r".indexOf(text.charAt(0)) >= 0) {
+            return "'" + text;
+        }
+        return text;
+    }
+}

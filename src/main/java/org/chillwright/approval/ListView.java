@@ -1,0 +1,9 @@
+package org.chillwright.approval;
+
+import java.time.Instant;
+import java.util.List;
+
+/** An approved list with its entries. Send {@code version} back with an edit. */
+public record ListView(long id, long version, String name, String description, String createdBy, Instant createdAt,
+        String changedBy, Instant changedAt, List<EntryView> entries) {
+}

@@ -1,0 +1,12 @@
+package org.chillwright.approval.api;
+
+import jakarta.validation.constraints.NotBlank;
+import jakarta.validation.constraints.Pattern;
+import jakarta.validation.constraints.Size;
+import org.chillwright.approval.Text;
+
+/** {@code POST /api/v1/lists}. */
+public record CreateListRequest(
+        @NotBlank @Size(max = Text.NAME_MAX) @Pattern(regexp = Text.LINE, message = Text.BINARY_MESSAGE) String name,
+        @Size(max = Text.NOTE_MAX) @Pattern(regexp = Text.LINES, message = Text.BINARY_MESSAGE) String description) {
+}

@@ -1,0 +1,100 @@
+package org.chillwright.browser;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.time.Duration;
+import java.util.EnumSet;
+import org.chillwright.account.AccountService;
+import org.chillwright.account.Role;
+import org.chillwright.approval.ApprovalFixtures;
+import org.chillwright.approval.ApprovedListService;
+import org.chillwright.approval.TestModuleDirectory;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.openqa.selenium.By;
+import org.openqa.selenium.WebDriver;
+import org.openqa.selenium.support.ui.ExpectedConditions;
+import org.openqa.selenium.support.ui.Select;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.test.web.server.LocalServerPort;
+
+/**
+ * In Chromium, through the pages: an engineer proposes a module on a list and sends it to
+ * qualification, an approver signs in and approves it, and the list shows it approved with the
+ * audit trail of all three steps.
+ */
+@SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT, properties = TestModuleDirectory.ENABLED)
+class ApprovalJourneyIT {
+
+    private static Browser browser;
+
+    @LocalServerPort
+    int port;
+    @Autowired
+    AccountService accounts;
+    @Autowired
+    ApprovedListService lists;
+
+    @BeforeAll
+    static void openBrowser() throws Exception {
+        browser = new Browser();
+    }
+
+    @AfterAll
+    static void closeBrowser() {
+        browser.close();
+    }
+
+    private void signIn(WebDriver driver, String username) {
+        driver.get("http://localhost:" + port + "/login");
+        driver.findElement(By.id("username")).sendKeys(username);
+        driver.findElement(By.id("password")).sendKeys(ApprovalFixtures.PASSWORD);
+        driver.findElement(By.cssSelector("main button[type=submit]")).click();
+        browser.waitUpTo(Duration.ofSeconds(10)).until(ExpectedConditions.textToBePresentInElementLocated(
+                By.cssSelector(".who"), username));
+    }
+
+    private void move(WebDriver driver, String entryId, String to, String reason) {
+        new Select(driver.findElement(By.id("to-" + entryId))).selectByValue(to);
+        driver.findElement(By.id("reason-" + entryId)).sendKeys(reason);
+        driver.findElement(By.cssSelector("#entry-" + entryId + " form.transition button")).click();
+        browser.waitUpTo(Duration.ofSeconds(10)).until(ExpectedConditions.textToBePresentInElementLocated(
+                By.cssSelector("#entry-" + entryId + " .state"), to));
+    }
+
+    @Test
+    void engineerProposesApproverApprovesAndTheListShowsItWithItsAuditTrail() throws Exception {
+        ApprovalFixtures.account(accounts, "journey-engineer", EnumSet.of(Role.ENGINEER));
+        ApprovalFixtures.account(accounts, "journey-approver", EnumSet.of(Role.APPROVER));
+        var list = lists.create(ApprovalFixtures.unique("Laser driver line"), "modules for the 1550 nm head",
+                ApprovalFixtures.ADMIN);
+        String listPage = "http://localhost:" + port + "/lists/" + list.id();
+        var driver = browser.driver();
+
+        signIn(driver, "journey-engineer");
+        driver.get(listPage);
+        driver.findElement(By.id("moduleId")).sendKeys(String.valueOf(TestModuleDirectory.ACTIVE));
+        driver.findElement(By.id("note")).sendKeys("holds 20 °C at 45 °C ambient with the 0.4 K/W sink");
+        driver.findElement(By.cssSelector("section[aria-labelledby=propose] button")).click();
+        var row = browser.waitUpTo(Duration.ofSeconds(10)).until(ExpectedConditions.presenceOfElementLocated(
+                By.cssSelector("tr[id^=entry-]")));
+        String entryId = row.getAttribute("id").substring("entry-".length());
+        move(driver, entryId, "QUALIFYING", "datasheet and outline drawing received");
+        driver.findElement(By.cssSelector(".who button")).click();
+
+        signIn(driver, "journey-approver");
+        driver.get(listPage);
+        move(driver, entryId, "APPROVED", "pilot build held the set-point for 72 h");
+        browser.screenshot("list-approved");
+
+        assertThat(driver.findElement(By.cssSelector("#entry-" + entryId + " .changed-by")).getText())
+                .isEqualTo("journey-approver");
+        var audit = driver.findElements(By.cssSelector("table.audit tbody tr"));
+        assertThat(audit).extracting(org.openqa.selenium.WebElement::getText).satisfiesExactly(
+                proposed -> assertThat(proposed).contains("journey-engineer", "PROPOSED"),
+                qualifying -> assertThat(qualifying).contains("journey-engineer", "QUALIFYING", "datasheet"),
+                approved -> assertThat(approved).contains("journey-approver", "APPROVED", "pilot build"));
+    }
+}
