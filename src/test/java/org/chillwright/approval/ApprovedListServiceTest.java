@@ -14,7 +14,7 @@ import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.security.access.AccessDeniedException;
 
 /** What other features call: the approved module ids of a list, and where a module stands. */
-@SpringBootTest
+@SpringBootTest(properties = TestModuleDirectory.ENABLED)
 class ApprovedListServiceTest {
 
     @Autowired

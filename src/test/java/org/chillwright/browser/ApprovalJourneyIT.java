@@ -8,7 +8,9 @@ import org.chillwright.account.AccountService;
 import org.chillwright.account.Role;
 import org.chillwright.approval.ApprovalFixtures;
 import org.chillwright.approval.ApprovedListService;
-import org.chillwright.approval.TestModuleDirectory;
+import org.chillwright.catalog.CatalogService;
+import org.chillwright.catalog.ModuleQuery;
+import org.chillwright.selection.TestCatalog;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -23,9 +25,9 @@ import org.springframework.boot.test.web.server.LocalServerPort;
 /**
  * In Chromium, through the pages: an engineer proposes a module on a list and sends it to
  * qualification, an approver signs in and approves it, and the list shows it approved with the
- * audit trail of all three steps.
+ * audit trail of all three steps; a ranking restricted to the list then considers only that module.
  */
-@SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT, properties = TestModuleDirectory.ENABLED)
+@SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
 class ApprovalJourneyIT {
 
     private static Browser browser;
@@ -36,6 +38,8 @@ class ApprovalJourneyIT {
     AccountService accounts;
     @Autowired
     ApprovedListService lists;
+    @Autowired
+    CatalogService catalog;
 
     @BeforeAll
     static void openBrowser() throws Exception {
@@ -66,6 +70,8 @@ class ApprovalJourneyIT {
 
     @Test
     void engineerProposesApproverApprovesAndTheListShowsItWithItsAuditTrail() throws Exception {
+        TestCatalog.ensure(catalog);
+        long moduleId = catalog.search(ModuleQuery.text("TMA-HALF")).items().get(0).id();
         ApprovalFixtures.account(accounts, "journey-engineer", EnumSet.of(Role.ENGINEER));
         ApprovalFixtures.account(accounts, "journey-approver", EnumSet.of(Role.APPROVER));
         var list = lists.create(ApprovalFixtures.unique("Laser driver line"), "modules for the 1550 nm head",
@@ -75,7 +81,7 @@ class ApprovalJourneyIT {
 
         signIn(driver, "journey-engineer");
         driver.get(listPage);
-        driver.findElement(By.id("moduleId")).sendKeys(String.valueOf(TestModuleDirectory.ACTIVE));
+        driver.findElement(By.id("moduleId")).sendKeys(String.valueOf(moduleId));
         driver.findElement(By.id("note")).sendKeys("holds 20 °C at 45 °C ambient with the 0.4 K/W sink");
         driver.findElement(By.cssSelector("section[aria-labelledby=propose] button")).click();
         var row = browser.waitUpTo(Duration.ofSeconds(10)).until(ExpectedConditions.presenceOfElementLocated(
@@ -96,5 +102,18 @@ class ApprovalJourneyIT {
                 proposed -> assertThat(proposed).contains("journey-engineer", "PROPOSED"),
                 qualifying -> assertThat(qualifying).contains("journey-engineer", "QUALIFYING", "datasheet"),
                 approved -> assertThat(approved).contains("journey-approver", "APPROVED", "pilot build"));
+
+        // a ranking restricted to the list, through the case form, shows the approved module and no other
+        driver.get("http://localhost:" + port + "/cases/new");
+        new Select(driver.findElement(By.id("listId"))).selectByValue(String.valueOf(list.id()));
+        var load = driver.findElement(By.id("activeLoad"));
+        load.clear();
+        load.sendKeys("3");
+        driver.findElement(By.cssSelector("button.primary[type=submit]")).click();
+        browser.waitUpTo(Duration.ofSeconds(10)).until(ExpectedConditions.presenceOfElementLocated(
+                By.cssSelector("table.ranking")));
+        browser.screenshot("ranking-restricted-to-list");
+        assertThat(driver.findElements(By.cssSelector("table.ranking tbody td:nth-child(3)")))
+                .extracting(org.openqa.selenium.WebElement::getText).isNotEmpty().containsOnly("TMA-HALF");
     }
 }
