@@ -16,7 +16,8 @@ import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.boot.test.web.server.LocalServerPort;
 
 /** Heat harvesting in Chromium: case form → ranking → design with its two charts drawn. */
-@SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
+@SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT,
+        properties = HarvestTestCatalog.OWN_DATABASE)
 class HarvestJourneyIT {
 
     private static Browser browser;

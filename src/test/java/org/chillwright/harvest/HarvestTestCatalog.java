@@ -22,6 +22,13 @@ public final class HarvestTestCatalog {
 
     public static final String SUPPLIER = "Heatrun Test Modules";
 
+    /**
+     * A property only the harvest test classes set, so that Spring caches a context of their own with its own
+     * in-memory database: these modules copy TM-A and would otherwise tie with the selection tests' modules
+     * and change those rankings.
+     */
+    public static final String OWN_DATABASE = "chillwright.test.catalog=harvest";
+
     private HarvestTestCatalog() {
     }
 

@@ -18,7 +18,7 @@ import org.springframework.test.web.servlet.assertj.MockMvcTester;
 import org.springframework.test.web.servlet.assertj.MvcTestResult;
 
 /** The harvest ranking through JSON, without signing in (a computation, open on the embedded default). */
-@SpringBootTest
+@SpringBootTest(properties = HarvestTestCatalog.OWN_DATABASE)
 @AutoConfigureMockMvc
 class HarvestApiControllerTest {
 

@@ -16,7 +16,7 @@ import org.springframework.test.web.servlet.assertj.MockMvcTester;
 import org.springframework.test.web.servlet.assertj.MvcTestResult;
 
 /** Harvest case → ranking → design through the pages, without signing in (open on the embedded default). */
-@SpringBootTest
+@SpringBootTest(properties = HarvestTestCatalog.OWN_DATABASE)
 @AutoConfigureMockMvc
 class HarvestPagesTest {
 
