@@ -8,6 +8,7 @@ import java.util.Optional;
 import java.util.stream.IntStream;
 import org.chillwright.physics.GeneratorCase;
 import org.chillwright.physics.GeneratorSolver;
+import org.chillwright.physics.ModuleArray;
 import org.chillwright.physics.ModuleParameters;
 import org.chillwright.physics.Units;
 
@@ -20,19 +21,6 @@ import org.chillwright.physics.Units;
 public final class HarvestEngine {
 
     private final GeneratorSolver solver = new GeneratorSolver();
-
-    /** Every (series, parallel) split with series × parallel ≤ maxModules, fewest modules first. */
-    static int[][] splits(int maxModules) {
-        var splits = new ArrayList<int[]>();
-        for (int count = 1; count <= maxModules; count++) {
-            for (int series = 1; series <= count; series++) {
-                if (count % series == 0) {
-                    splits.add(new int[] {series, count / series});
-                }
-            }
-        }
-        return splits.toArray(int[][]::new);
-    }
 
     /**
      * One design in full: open circuit, best-power point, best-efficiency point.
@@ -79,7 +67,7 @@ public final class HarvestEngine {
     public HarvestRanking rank(GeneratorTable table, HarvestCase harvestCase) {
         long start = System.nanoTime();
         GeneratorCase c = harvestCase.generatorCase();
-        int[][] splits = splits(harvestCase.maxModules());
+        int[][] splits = ModuleArray.splits(harvestCase.maxModules());
         int n = table.size();
         var designs = new HarvestDesign[n * splits.length];
         IntStream.range(0, n).parallel().forEach(i -> {

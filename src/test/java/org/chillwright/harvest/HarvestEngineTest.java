@@ -152,7 +152,7 @@ class HarvestEngineTest {
     void everySplitKeepsTheSingleModulesMaximumEfficiency() {
         // arrays keep Z (physics.md g, case S14), and between fixed junctions η_max depends on Z only
         // (physics.md i): every split has S13's η_max 0.03244608572
-        for (int[] split : HarvestEngine.splits(8)) {
+        for (int[] split : org.chillwright.physics.ModuleArray.splits(8)) {
             var design = engine.design(A, TM_A, split[0], split[1], s13(), Double.NaN, Double.NaN);
             assertThat(design.atMaxEfficiency().efficiency()).as("%dx%d", split[0], split[1])
                     .isCloseTo(0.03244608572, withinPercentage(1e-4));
