@@ -41,7 +41,7 @@ class SecurityConfig {
     /** API routes that only compute: no state changes, so open on the embedded default. */
     static final String[] API_COMPUTATIONS = {
         "/api/v1/derive", "/api/v1/operating-point", "/api/v1/rankings", "/api/v1/cascade/**",
-        "/api/v1/cooldown", "/api/v1/generator/**"
+        "/api/v1/cooldown", "/api/v1/generator/**", "/api/v1/harvest/**"
     };
     /** API reads open on the embedded default. */
     static final String[] API_OPEN_READS = {"/api/v1/modules", "/api/v1/modules/**", "/api/v1/dew-point"};

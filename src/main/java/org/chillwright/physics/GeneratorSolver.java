@@ -52,10 +52,16 @@ public final class GeneratorSolver {
         };
         double highA = s * (c.hotSourceK() - c.coldSinkK()) / circuitOhm; // junction ΔT never exceeds the source-sink ΔT
         double currentA;
-        try {
-            currentA = new BrentSolver(CURRENT_ACCURACY_A).solve(MAX_EVALUATIONS, surplusV, 0, highA); // per-call state
-        } catch (NoBracketingException | MathIllegalStateException e) {
-            throw new IllegalStateException("generator current solve failed for a " + loadOhm + " ohm load", e);
+        if (!(surplusV.value(highA) < 0)) {
+            // ideal heat exchangers: the junctions sit at the source and sink, so highA is the root itself and
+            // rounding may leave its surplus at +1 ulp, which no bracket would accept
+            currentA = highA;
+        } else {
+            try {
+                currentA = new BrentSolver(CURRENT_ACCURACY_A).solve(MAX_EVALUATIONS, surplusV, 0, highA); // per-call state
+            } catch (NoBracketingException | MathIllegalStateException e) {
+                throw new IllegalStateException("generator current solve failed for a " + loadOhm + " ohm load", e);
+            }
         }
         double[] junctionK = junctionsK(module, c, currentA);
         double th = junctionK[0];

@@ -18,6 +18,25 @@ public record ModuleArray(ModuleParameters module, int seriesCount, int parallel
         Check.atLeastOne("parallelCount", parallelCount);
     }
 
+    /**
+     * Every (series, parallel) split with series × parallel ≤ {@code maxModules}, fewest modules first and,
+     * for one count, fewest in series first: the designs a ranking tries.
+     *
+     * @param maxModules most modules in one design, ≥ 1
+     */
+    public static int[][] splits(int maxModules) {
+        Check.atLeastOne("maxModules", maxModules);
+        var splits = new java.util.ArrayList<int[]>();
+        for (int count = 1; count <= maxModules; count++) {
+            for (int series = 1; series <= count; series++) {
+                if (count % series == 0) {
+                    splits.add(new int[] {series, count / series});
+                }
+            }
+        }
+        return splits.toArray(int[][]::new);
+    }
+
     /** A single module. */
     public static ModuleArray single(ModuleParameters module) {
         return new ModuleArray(module, 1, 1);

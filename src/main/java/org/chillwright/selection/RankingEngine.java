@@ -31,15 +31,7 @@ public final class RankingEngine {
 
     /** Every (series, parallel) split with series × parallel ≤ maxModules, fewest modules first. */
     static int[][] configurations(int maxModules) {
-        var splits = new ArrayList<int[]>();
-        for (int count = 1; count <= maxModules; count++) {
-            for (int series = 1; series <= count; series++) {
-                if (count % series == 0) {
-                    splits.add(new int[] {series, count / series});
-                }
-            }
-        }
-        return splits.toArray(int[][]::new);
+        return ModuleArray.splits(maxModules);
     }
 
     public Ranking rank(CandidateTable table, RankingCase rankingCase) {

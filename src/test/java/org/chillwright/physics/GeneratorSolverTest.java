@@ -21,6 +21,16 @@ class GeneratorSolverTest {
     }
 
     @Test
+    void idealExchangersSolveEveryLoadOfAnArray() {
+        // Source: I = Voc/(R + RL), physics.md i (Ioffe 1957, from memory). Four TM-A in series (S 0.16 V/K,
+        // R 9.6 Ω) on a 9.808 Ω load once failed to bracket: the bracket end is the root itself.
+        var array = TM_A.inArray(4, 1);
+        double loadOhm = 9.80817245099401;
+        assertThat(solver.atLoad(array, GeneratorCase.atJunctions(373.15, 303.15), loadOhm).currentA())
+                .isCloseTo(0.16 * 70 / (9.6 + loadOhm), within(1e-12));
+    }
+
+    @Test
     void exchangerResistancesRaiseTheMaxPowerLoad() {
         // Source: thermal matching moves the optimum away from RL = R (physics.md i; Yazawa & Shakouri,
         // J. Appl. Phys. 111, 2012, from memory). Each half of the heat path drops part of the ΔT.

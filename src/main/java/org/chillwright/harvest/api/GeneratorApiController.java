@@ -4,10 +4,8 @@ import io.swagger.v3.oas.annotations.Operation;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.validation.Valid;
 import org.chillwright.catalog.ModuleResolver;
-import org.chillwright.physics.GeneratorCase;
 import org.chillwright.physics.GeneratorSolver;
 import org.chillwright.physics.Units;
-import org.chillwright.web.InvalidRequestException;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RequestMapping;
@@ -28,14 +26,9 @@ class GeneratorApiController {
     @PostMapping("/operating-point")
     @Operation(summary = "Generator point on a load, or on the load that gives the most power")
     GeneratorResponse operatingPoint(@Valid @RequestBody GeneratorRequest request) {
-        if (request.hotSourceC() <= request.coldSinkC()) {
-            throw new InvalidRequestException("hotSourceC", "must be warmer than coldSinkC (" + request.coldSinkC()
-                    + " °C) for the module to generate, was " + request.hotSourceC() + " °C");
-        }
+        var generatorCase = GeneratorEdge.generatorCase(request.hotSourceC(), request.coldSinkC(),
+                request.hotResistanceKPerW(), request.coldResistanceKPerW());
         var module = modules.resolve(request.module(), "module").parameters();
-        var generatorCase = new GeneratorCase(Units.kelvinFromCelsius(request.hotSourceC()),
-                Units.kelvinFromCelsius(request.coldSinkC()), request.hotResistanceKPerW(),
-                request.coldResistanceKPerW());
         var maxPower = solver.maxPower(module, generatorCase);
         var maxEfficiency = solver.maxEfficiency(module, generatorCase);
         var point = request.loadOhm() == null ? maxPower : solver.atLoad(module, generatorCase, request.loadOhm());
