@@ -11,8 +11,6 @@ import org.chillwright.approval.ApprovedListService;
 import org.chillwright.catalog.CatalogService;
 import org.chillwright.catalog.ModuleQuery;
 import org.chillwright.selection.TestCatalog;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.openqa.selenium.By;
 import org.openqa.selenium.WebDriver;
@@ -20,7 +18,6 @@ import org.openqa.selenium.support.ui.ExpectedConditions;
 import org.openqa.selenium.support.ui.Select;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
-import org.springframework.boot.test.web.server.LocalServerPort;
 
 /**
  * In Chromium, through the pages: an engineer proposes a module on a list and sends it to
@@ -28,12 +25,8 @@ import org.springframework.boot.test.web.server.LocalServerPort;
  * audit trail of all three steps; a ranking restricted to the list then considers only that module.
  */
 @SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
-class ApprovalJourneyIT {
+class ApprovalJourneyIT extends BrowserJourney {
 
-    private static Browser browser;
-
-    @LocalServerPort
-    int port;
     @Autowired
     AccountService accounts;
     @Autowired
@@ -41,18 +34,8 @@ class ApprovalJourneyIT {
     @Autowired
     CatalogService catalog;
 
-    @BeforeAll
-    static void openBrowser() throws Exception {
-        browser = new Browser();
-    }
-
-    @AfterAll
-    static void closeBrowser() {
-        browser.close();
-    }
-
     private void signIn(WebDriver driver, String username) {
-        driver.get("http://localhost:" + port + "/login");
+        driver.get(url("/login"));
         driver.findElement(By.id("username")).sendKeys(username);
         driver.findElement(By.id("password")).sendKeys(ApprovalFixtures.PASSWORD);
         driver.findElement(By.cssSelector("main button[type=submit]")).click();
@@ -76,7 +59,7 @@ class ApprovalJourneyIT {
         ApprovalFixtures.account(accounts, "journey-approver", EnumSet.of(Role.APPROVER));
         var list = lists.create(ApprovalFixtures.unique("Laser driver line"), "modules for the 1550 nm head",
                 ApprovalFixtures.ADMIN);
-        String listPage = "http://localhost:" + port + "/lists/" + list.id();
+        String listPage = url("/lists/" + list.id());
         var driver = browser.driver();
 
         signIn(driver, "journey-engineer");
@@ -104,7 +87,7 @@ class ApprovalJourneyIT {
                 approved -> assertThat(approved).contains("journey-approver", "APPROVED", "pilot build"));
 
         // a ranking restricted to the list, through the case form, shows the approved module and no other
-        driver.get("http://localhost:" + port + "/cases/new");
+        driver.get(url("/cases/new"));
         new Select(driver.findElement(By.id("listId"))).selectByValue(String.valueOf(list.id()));
         var load = driver.findElement(By.id("activeLoad"));
         load.clear();

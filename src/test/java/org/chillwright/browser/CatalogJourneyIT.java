@@ -7,44 +7,24 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.UUID;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.openqa.selenium.By;
 import org.openqa.selenium.WebDriver;
 import org.openqa.selenium.support.ui.ExpectedConditions;
 import org.springframework.boot.test.context.SpringBootTest;
-import org.springframework.boot.test.web.server.LocalServerPort;
 
 /**
  * An engineer adds a module through the form and sees its derived parameters and charts drawn, then
  * imports a CSV with one bad row and sees the row-level error with the catalog unchanged.
  */
 @SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
-class CatalogJourneyIT {
+class CatalogJourneyIT extends BrowserJourney {
 
     private static final Duration PATIENCE = Duration.ofSeconds(15);
-    private static Browser browser;
 
-    @LocalServerPort
-    int port;
     @TempDir
     Path files;
-
-    @BeforeAll
-    static void openBrowser() throws Exception {
-        browser = new Browser();
-    }
-
-    @AfterAll
-    static void closeBrowser() {
-        browser.close();
-    }
-
-    private String url(String path) {
-        return "http://localhost:" + port + path;
-    }
 
     private void signIn(WebDriver driver) {
         driver.get(url("/login"));

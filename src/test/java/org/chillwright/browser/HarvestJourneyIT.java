@@ -5,44 +5,27 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.time.Duration;
 import org.chillwright.catalog.CatalogService;
 import org.chillwright.harvest.HarvestTestCatalog;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.openqa.selenium.By;
 import org.openqa.selenium.support.ui.ExpectedConditions;
 import org.openqa.selenium.support.ui.Select;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
-import org.springframework.boot.test.web.server.LocalServerPort;
 
 /** Heat harvesting in Chromium: case form → ranking → design with its two charts drawn. */
 @SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT,
         properties = HarvestTestCatalog.OWN_DATABASE)
-class HarvestJourneyIT {
+class HarvestJourneyIT extends BrowserJourney {
 
-    private static Browser browser;
-
-    @LocalServerPort
-    int port;
     @Autowired
     CatalogService catalog;
-
-    @BeforeAll
-    static void openBrowser() throws Exception {
-        browser = new Browser();
-    }
-
-    @AfterAll
-    static void closeBrowser() {
-        browser.close();
-    }
 
     @Test
     void caseToRankingToDesignWithDrawnCharts() throws Exception {
         HarvestTestCatalog.ensure(catalog);
         var driver = browser.driver();
         var wait = browser.waitUpTo(Duration.ofSeconds(15));
-        driver.get("http://localhost:" + port + "/");
+        driver.get(url("/"));
         driver.findElement(By.linkText("Harvest")).click();
         wait.until(ExpectedConditions.presenceOfElementLocated(By.id("hotSource")));
 

@@ -3,37 +3,19 @@ package org.chillwright.browser;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.time.Duration;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.openqa.selenium.By;
 import org.openqa.selenium.support.ui.ExpectedConditions;
 import org.springframework.boot.test.context.SpringBootTest;
-import org.springframework.boot.test.web.server.LocalServerPort;
 
 /** A newcomer opens the home page in a real browser and signs in through our login page. */
 @SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
-class HomeAndSignInIT {
-
-    private static Browser browser;
-
-    @LocalServerPort
-    int port;
-
-    @BeforeAll
-    static void openBrowser() throws Exception {
-        browser = new Browser();
-    }
-
-    @AfterAll
-    static void closeBrowser() {
-        browser.close();
-    }
+class HomeAndSignInIT extends BrowserJourney {
 
     @Test
     void homePageExplainsTheToolAndSignInWorks() throws Exception {
         var driver = browser.driver();
-        driver.get("http://localhost:" + port + "/");
+        driver.get(url("/"));
         assertThat(driver.findElement(By.tagName("h1")).getText()).contains("thermoelectric cooler");
         assertThat(driver.findElement(By.cssSelector(".caution")).getText()).contains("heat sink");
         browser.screenshot("home");
@@ -52,7 +34,7 @@ class HomeAndSignInIT {
     void wrongPasswordShowsAPlainMessage() {
         var driver = browser.driver();
         driver.manage().deleteAllCookies();
-        driver.get("http://localhost:" + port + "/login");
+        driver.get(url("/login"));
         driver.findElement(By.id("username")).sendKeys("admin");
         driver.findElement(By.id("password")).sendKeys("wrong-password");
         driver.findElement(By.cssSelector("button[type=submit]")).click();

@@ -9,42 +9,25 @@ import java.net.http.HttpResponse;
 import java.time.Duration;
 import org.chillwright.catalog.CatalogService;
 import org.chillwright.selection.TestCatalog;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.openqa.selenium.By;
 import org.openqa.selenium.support.ui.ExpectedConditions;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
-import org.springframework.boot.test.web.server.LocalServerPort;
 
 /** An engineer's whole journey in Chromium: case → ranking → candidate with a drawn chart → compare → PDF. */
 @SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
-class SelectionJourneyIT {
+class SelectionJourneyIT extends BrowserJourney {
 
-    private static Browser browser;
-
-    @LocalServerPort
-    int port;
     @Autowired
     CatalogService catalog;
-
-    @BeforeAll
-    static void openBrowser() throws Exception {
-        browser = new Browser();
-    }
-
-    @AfterAll
-    static void closeBrowser() {
-        browser.close();
-    }
 
     @Test
     void caseToRankingToCandidateToCompareToReport() throws Exception {
         TestCatalog.ensure(catalog);
         var driver = browser.driver();
         var wait = browser.waitUpTo(Duration.ofSeconds(15));
-        driver.get("http://localhost:" + port + "/cases/new");
+        driver.get(url("/cases/new"));
 
         // the check-cases.json S10 set-up, typed in: 10 W at 5 °C, 25 °C ambient, 0.3 K/W sink
         type("objectTemperature", "5");
