@@ -204,12 +204,17 @@ public final class OperatingPointSolver {
      * (load above the capacity peak, ΔT beyond reach, or a cold face at or below 0 K). Allocation-free,
      * for ranking. Arguments are not checked.
      *
-     * <p>Newton from I = 0 with the analytic derivative. Qc(I) is concave on [0, I_run)
-     * (physics.md e), so every tangent lies above the curve: from a point left of the lower root each
-     * Newton step lands at or left of that root, and the iterates rise monotonically to it, never
-     * reaching the upper root. If the slope becomes ≤ 0 (or the step passes the runaway current)
-     * before the load is reached, the iterates have passed the peak below the load, which only
-     * happens when the load is above capacity.
+     * <p>Newton with the analytic derivative, started at the smaller root of the second-order Taylor
+     * polynomial of Qc at I = 0. In d = 1 + Rh·K − Rh·S·I, which is linear in I, Th(I) = α/d + β + γ·d
+     * with α = Th·d at the runaway current, α ≥ 0; so Th‴ = 6α(Rh·S)³/d⁴ ≥ 0 and Qc‴ = −K·Th‴ ≤ 0.
+     * Qc″ therefore only falls as I grows, the Taylor polynomial lies on or above Qc for I ≥ 0, and
+     * its root is at or left of the lower root. With an ideal sink (Rh = 0) Qc is exactly that
+     * quadratic and the start is the closed form of physics.md e (case S09), which the first step only
+     * confirms. Qc(I) is concave on [0, I_run) (physics.md e), so every tangent lies above the curve:
+     * from a point left of the lower root each Newton step lands at or left of that root, and the
+     * iterates rise monotonically to it, never reaching the upper root. If the slope becomes ≤ 0 (or
+     * the step passes the runaway current) before the load is reached, the iterates have passed the
+     * peak below the load, which only happens when the load is above capacity.
      *
      * @param seebeckVPerK     S, V/K
      * @param resistanceOhm    R, Ω
@@ -229,18 +234,33 @@ public final class OperatingPointSolver {
         if (!(tc > 0)) {
             return Double.NaN;
         }
-        double i = 0;
+        // Qc − Qload and its first two derivatives at I = 0, where d = 1 + Rh·K
+        double d0 = 1 + rh * k;
+        double th0 = (ambientK + rh * k * tc) / d0;
+        double surplus0 = -k * (th0 - tc) - heatLoadW;
+        if (surplus0 >= 0) {
+            return 0.0; // passive: conduction alone carries the load
+        }
+        double thSlope0 = rh * s * th0 / d0;
+        double slope0 = s * tc - k * thSlope0;
+        if (!(slope0 > 0)) {
+            return Double.NaN; // concave and already falling at zero current: no current helps
+        }
+        double curvature0 = -r - k * rh * (r + 2 * s * thSlope0) / d0;
+        // Smaller root of surplus0 + slope0·I + ½·curvature0·I² = 0 in cancellation-free form. If the
+        // polynomial never reaches the load, the load is above capacity; Newton from I = 0 still
+        // decides it, so that round-off in the bound can never refuse a feasible load.
+        double discriminant = slope0 * slope0 - 2 * curvature0 * surplus0;
+        double i = discriminant >= 0 ? -2 * surplus0 / (slope0 + Math.sqrt(discriminant)) : 0.0;
         for (int n = 0; n < MAX_ITERATIONS; n++) {
             double d = 1 + rh * k - rh * s * i;            // denominator of Th(I)
             if (!(d > 0)) {
                 return Double.NaN;
             }
-            double th = (ambientK + rh * (0.5 * r * i * i + k * tc)) / d;
+            double perD = 1 / d;                           // one division serves Th and Th'
+            double th = (ambientK + rh * (0.5 * r * i * i + k * tc)) * perD;
             double surplusW = s * i * tc - 0.5 * r * i * i - k * (th - tc) - heatLoadW;
-            if (n == 0 && surplusW >= 0) {
-                return 0.0; // passive: conduction alone carries the load
-            }
-            double slope = s * tc - r * i - k * rh * (r * i + s * th) / d; // dQc/dI = S·Tc − R·I − K·Th'(I)
+            double slope = s * tc - r * i - k * rh * (r * i + s * th) * perD; // dQc/dI = S·Tc − R·I − K·Th'(I)
             if (!(slope > 0)) {
                 return Double.NaN;
             }

@@ -71,6 +71,22 @@ class OperatingPointSolverTest {
     }
 
     @Test
+    void fastPathWithAnIdealSinkIsTheClosedForm() {
+        // Source: physics.md e, Rh = 0 closed form (case S09): Qc is then exactly quadratic, so the
+        // Taylor start of the Newton iteration is already the root.
+        double hotK = 298.15;
+        double fastA = OperatingPointSolver.currentForLoadA(0.04, 2.4, 0.25, 277.15, hotK, 0, 10);
+        assertThat(fastA).isCloseTo(TM_A.currentForLoadA(10, 277.15, hotK).orElseThrow(), within(1e-12));
+    }
+
+    @Test
+    void fastPathIsNaNWhenEvenTheTaylorBoundStaysBelowTheLoad() {
+        // The quadratic bound at I = 0 peaks at 14.21 W for Tc = 275.65 K (its coefficients at I = 0); 15 W is
+        // above it, so the iteration starts from zero and runs past the peak.
+        assertThat(OperatingPointSolver.currentForLoadA(0.04, 2.4, 0.25, 275.65, 298.15, 0.35, 15)).isNaN();
+    }
+
+    @Test
     void maxHeatLoadIsTheEdgeOfFeasibility() {
         // Self-consistency: just below the reported capacity the load is solved, just above it is not.
         Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
