@@ -97,6 +97,32 @@ class OperatingPointSolverTest {
     }
 
     @Test
+    void capacityRestartsFromTheBracketedPeakWhenItsSeedLeavesTheDomain() {
+        // A seed beyond the runaway current (1 + Rh·K)/(Rh·S) = 77.7 A makes the first 2-D Newton give up.
+        Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
+        OperatingPointSolver.PeakPoint restarted = OperatingPointSolver.capacityAtObject(0.04, 2.4, 0.25, 278.15,
+                0.1, 298.15, 0.35, 10, 100, 277.15);
+        assertThat(restarted.heatW()).isCloseTo(point.maxHeatLoadW(), within(1e-9));
+        assertThat(restarted.currentA()).isCloseTo(point.currentAtMaxHeatLoadA(), within(1e-9));
+    }
+
+    @ParameterizedTest
+    @MethodSource("overDrivenCurrents")
+    void capacityAndMarginDependOnlyOnTheObjectTemperatureAndLoad(double currentA) {
+        // At a fixed current beyond the peak (3.8 A) the capacity search starts on the falling side of
+        // Qc(I); the answers must still be those of the same object temperature and load.
+        var c = new CoolingCase(278.15, 298.15, 10, 0.3, 0.1, 0.05);
+        Solved driven = solved(solver.atCurrent(ModuleArray.single(TM_A), c, DriveLimits.NONE, currentA));
+        Solved designed = solved(solver.solve(TM_A, objectAt(driven.objectK()), DriveLimits.NONE));
+        assertThat(driven.maxHeatLoadW()).isCloseTo(designed.maxHeatLoadW(), within(1e-9));
+        assertThat(driven.marginK()).isCloseTo(designed.marginK(), within(1e-9));
+    }
+
+    static Stream<Double> overDrivenCurrents() {
+        return Stream.of(4.5, 6.0);
+    }
+
+    @Test
     void loadMarginIsSpareCapacityOverLoad() {
         Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
         assertThat(point.loadMarginPct()).isCloseTo((point.maxHeatLoadW() - 10) / 10 * 100, within(1e-9));
