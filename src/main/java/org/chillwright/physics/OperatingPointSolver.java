@@ -245,18 +245,18 @@ public final class OperatingPointSolver {
             return Double.NaN;
         }
         // Qc − Qload and its first two derivatives at I = 0, where d = 1 + Rh·K
-        double d0 = 1 + rh * k;
-        double th0 = (ambientK + rh * k * tc) / d0;
+        double perD0 = 1 / (1 + rh * k);
+        double th0 = (ambientK + rh * k * tc) * perD0;
         double surplus0 = -k * (th0 - tc) - heatLoadW;
         if (surplus0 >= 0) {
             return 0.0; // passive: conduction alone carries the load
         }
-        double thSlope0 = rh * s * th0 / d0;
+        double thSlope0 = rh * s * th0 * perD0;
         double slope0 = s * tc - k * thSlope0;
         if (!(slope0 > 0)) {
             return Double.NaN; // concave and already falling at zero current: no current helps
         }
-        double curvature0 = -r - k * rh * (r + 2 * s * thSlope0) / d0;
+        double curvature0 = -r - k * rh * (r + 2 * s * thSlope0) * perD0;
         // Smaller root of surplus0 + slope0·I + ½·curvature0·I² = 0 in cancellation-free form. If the
         // polynomial never reaches the load, the load is above capacity; Newton from I = 0 still
         // decides it, so that round-off in the bound can never refuse a feasible load.
