@@ -268,9 +268,10 @@ public final class OperatingPointSolver {
                 return Double.NaN;
             }
             double perD = 1 / d;                           // one division serves Th and Th'
+            double rhPerD = rh * perD;                     // formed beside Th, so fewer products wait on Th
             double th = (ambientK + rh * (0.5 * r * i * i + k * tc)) * perD;
             double surplusW = s * i * tc - 0.5 * r * i * i - k * (th - tc) - heatLoadW;
-            double thSlope = rh * (r * i + s * th) * perD;                 // Th'(I)
+            double thSlope = rhPerD * (r * i + s * th);                     // Th'(I)
             double slope = s * tc - r * i - k * thSlope;                    // dQc/dI = S·Tc − R·I − K·Th'(I)
             if (!(slope > 0)) {
                 return Double.NaN;
@@ -280,7 +281,7 @@ public final class OperatingPointSolver {
             // Taylor: the surplus left after the step is ½·Qc''·ΔI², so about ½|Qc''|·ΔI²/Qc' of current is
             // still missing; compared without a division. Near a double root (slope → 0) only the step
             // test ends the iteration, as before.
-            double curvature = -r - k * rh * (r + 2 * s * thSlope) * perD; // d²Qc/dI² < 0
+            double curvature = -r - k * rhPerD * (r + 2 * s * thSlope);    // d²Qc/dI² < 0
             if (Math.abs(step) <= CURRENT_ACCURACY_A || -0.5 * curvature * step * step <= ROOT_ERROR_A * slope) {
                 return i;
             }
@@ -443,29 +444,38 @@ public final class OperatingPointSolver {
     }
 
     /**
-     * Lowest cold face, K, at which the load is still removed with I ≤ limitA: root of
-     * Qc(min(I_pk(Tc), limit), Tc) = Q. That capacity is convex and increasing in Tc. With the limit
-     * binding the root is a closed form; otherwise it is the peak on the line Qc = Q, by 2-D Newton
-     * from a second-order step along the peak from {@code capacity}, or, if that fails, Newton in Tc
-     * from the solved (feasible) {@code startK}, which descends monotonically to the root.
+     * Lowest cold face, K, at which the load is still removed with the current held at
+     * {@code limitA}, when that limit binds: Qc = a + B·Tc is affine in Tc at fixed I, so the cold face
+     * at which the limit current pumps exactly the load is a closed form from the solved (feasible)
+     * {@code startK}; the limit binds there when the peak lies at or beyond it (dQc/dI ≥ 0). NaN when
+     * it does not bind (or there is no limit, or the limit is at or beyond the runaway current).
+     * Independent of the capacity, so it is computed before that iteration and overlaps with it.
+     */
+    private static double coldSideAtCurrentLimitK(double s, double r, double k, double tamb, double rh, double loadW,
+                                                  double limitA, double startK) {
+        double dAtLimit = 1 + rh * k - rh * s * limitA;
+        if (!(limitA < Double.POSITIVE_INFINITY && dAtLimit > 0)) { // d > 0: the limit is below the runaway current
+            return Double.NaN;
+        }
+        double perD = 1 / dAtLimit; // every term at the limit current shares 1/d
+        double sensitivity = s * limitA + k * (1 - rh * s * limitA) * perD;
+        double startHotK = (tamb + rh * (0.5 * r * limitA * limitA + k * startK)) * perD;
+        double startW = s * limitA * startK - 0.5 * r * limitA * limitA - k * (startHotK - startK);
+        double atLimitK = startK + (loadW - startW) / sensitivity;
+        double hotK = (tamb + rh * (0.5 * r * limitA * limitA + k * atLimitK)) * perD;
+        double slope = s * atLimitK - r * limitA - k * rh * (r * limitA + s * hotK) * perD;
+        return atLimitK > 0 && slope >= 0 ? atLimitK : Double.NaN;
+    }
+
+    /**
+     * Lowest cold face, K, at which the load is still removed with I ≤ limitA when the limit does not
+     * bind (see {@link #coldSideAtCurrentLimitK}): root of Qc(min(I_pk(Tc), limit), Tc) = Q, a
+     * capacity convex and increasing in Tc. The peak on the line Qc = Q, by 2-D Newton from a
+     * second-order step along the peak from {@code capacity}, or, if that fails, Newton in Tc from the
+     * solved (feasible) {@code startK}, which descends monotonically to the root.
      */
     static double lowestColdSideK(double s, double r, double k, double tamb, double rh, double loadW, double limitA,
                                   double startK, PeakPoint capacity) {
-        double dAtLimit = 1 + rh * k - rh * s * limitA;
-        if (limitA < Double.POSITIVE_INFINITY && dAtLimit > 0) { // d > 0: the limit is below the runaway current
-            // Qc = a + B·Tc is affine in Tc at fixed I, and every term at the limit current shares
-            // 1/d: the cold face at which the limit current pumps exactly the load.
-            double perD = 1 / dAtLimit;
-            double sensitivity = s * limitA + k * (1 - rh * s * limitA) * perD;
-            double startHotK = (tamb + rh * (0.5 * r * limitA * limitA + k * startK)) * perD;
-            double startW = s * limitA * startK - 0.5 * r * limitA * limitA - k * (startHotK - startK);
-            double atLimitK = startK + (loadW - startW) / sensitivity;
-            double hotK = (tamb + rh * (0.5 * r * limitA * limitA + k * atLimitK)) * perD;
-            double slope = s * atLimitK - r * limitA - k * rh * (r * limitA + s * hotK) * perD;
-            if (atLimitK > 0 && slope >= 0) {
-                return atLimitK; // the peak there lies at or beyond the limit, so the limit binds
-            }
-        }
         // Along the peak Qpk(Tc + δ) ≈ Qpk + B·δ + ½G·δ², G = B'²/(−Qc_II) (envelope theorem and
         // dI_pk/dTc = −B'/Qc_II): its root nearest δ = 0 and the matching current start the Newton.
         double b = capacity.sensitivityWPerK();
@@ -503,7 +513,7 @@ public final class OperatingPointSolver {
      * [[β·Qc_I, α + β·B], [Qc_II, B']], where B = ∂Qc/∂Tc and B' = S(1 − (Rh·K/d)²). Quadratic from the
      * nearby start the callers give. Returns the peak point, or null when an iterate leaves the
      * physical domain (I &lt; 0, Tc ≤ 0, beyond runaway) or it does not settle, so that the caller falls
-     * back to its nested bracketed iteration. Two divisions a step, 1/d and 1/det, on the critical path.
+     * back to its nested bracketed iteration. Each step waits on two divisions: 1/d, then the two by det.
      */
     private static PeakPoint peakOnLine(double s, double r, double k, double tamb, double rh, double alpha,
                                         double beta, double gamma, double i, double tc) {
@@ -515,12 +525,13 @@ public final class OperatingPointSolver {
                 return null;
             }
             double perD = 1 / d;
+            double rhPerD = rh * perD;          // formed beside Th, so fewer products wait on Th and Th'
             double th = (tamb + rh * (0.5 * r * i * i + k * tc)) * perD;
-            double thSlope = rh * (r * i + s * th) * perD;
+            double thSlope = rhPerD * (r * i + s * th);
             double qc = s * i * tc - 0.5 * r * i * i - k * (th - tc);
             double slope = s * tc - r * i - k * thSlope;                     // Qc_I
-            double curvature = -r - k * rh * (r + 2 * s * thSlope) * perD;   // Qc_II
-            double ratio = rh * k * perD;
+            double curvature = -r - k * rhPerD * (r + 2 * s * thSlope);      // Qc_II
+            double ratio = k * rhPerD;
             double sensitivity = s * i + k * (1 - ratio);                    // B = ∂Qc/∂Tc
             double crossSlope = s * (1 - ratio * ratio);                     // B' = ∂Qc_I/∂Tc
             double f1 = alpha * tc + beta * qc - gamma;
@@ -530,9 +541,8 @@ public final class OperatingPointSolver {
             if (!(det != 0)) {
                 return null;
             }
-            double perDet = 1 / det;
-            double stepA = (-f1 * crossSlope + slope * j12) * perDet;
-            double stepK = (-slope * j11 + f1 * curvature) * perDet;
+            double stepA = (-f1 * crossSlope + slope * j12) / det; // two divisions side by side are as
+            double stepK = (-slope * j11 + f1 * curvature) / det;  // fast as one, and save a product
             i += stepA;
             tc += stepK;
             boolean small = Math.abs(stepA) <= CURRENT_ACCURACY_A && Math.abs(stepK) <= TEMPERATURE_ACCURACY_K;
@@ -635,6 +645,14 @@ public final class OperatingPointSolver {
         double powerW = currentA * voltageV;
         double rejectedW = loadW + powerW;
         double cop = powerW > 0 ? loadW / powerW : Double.POSITIVE_INFINITY;
+        // Everything that does not wait for the capacity and margin iterations comes first: its
+        // divisions and square roots then overlap with those latency-bound iterations in the core.
+        double dewPointK = dewPointK(c);
+        List<Warning> warnings = warnings(module, limits, currentA, coldK, hotK, dewPointK);
+        double fractionOfImax = limits.hasRatedImax() ? currentA / limits.ratedImaxA() : Double.NaN;
+        double copOptimalA = module.copOptimalCurrentA(coldK, hotK);
+        double maxCop = module.maxCop(coldK, hotK);
+        ModuleShare perModule = array.share(currentA, voltageV, loadW, rejectedW, powerW);
 
         // Start of the capacity peak: Qc' is concave in I (Qc‴ ≤ 0, see currentForLoadA), and the root
         // nearest zero of its second-order Taylor polynomial at the solved current is a near-peak
@@ -650,17 +668,15 @@ public final class OperatingPointSolver {
         double discriminant = Math.max(0.0, curvature * curvature - 2 * thirdDerivative * slope);
         double towardPeakA = -2 * slope / (curvature - Math.sqrt(discriminant));
         double seedA = Math.max(0.0, currentA + towardPeakA);
+        double limitA = limits.currentLimitA();
+        double atLimitK = coldSideAtCurrentLimitK(s, r, k, ambientK, rh, loadW, limitA, coldK);
         PeakPoint atObject = capacityAtObject(s, r, k, objectK, rc, ambientK, rh, loadW, seedA, coldK);
-        double lowestColdK = lowestColdSideK(s, r, k, ambientK, rh, loadW, limits.currentLimitA(), coldK, atObject);
+        double lowestColdK = Double.isNaN(atLimitK)
+                ? lowestColdSideK(s, r, k, ambientK, rh, loadW, limitA, coldK, atObject)
+                : atLimitK;
         double marginK = objectK - (lowestColdK + loadW * rc);
-
-        double dewPointK = dewPointK(c);
-        List<Warning> warnings = warnings(module, limits, currentA, coldK, hotK, dewPointK);
-        double fractionOfImax = limits.hasRatedImax() ? currentA / limits.ratedImaxA() : Double.NaN;
         return new Solved(currentA, voltageV, powerW, cop, objectK, coldK, hotK, rejectedW, loadW, fractionOfImax,
-                atObject.heatW(), atObject.currentA(), marginK, module.copOptimalCurrentA(coldK, hotK),
-                module.maxCop(coldK, hotK), dewPointK, warnings,
-                array.share(currentA, voltageV, loadW, rejectedW, powerW));
+                atObject.heatW(), atObject.currentA(), marginK, copOptimalA, maxCop, dewPointK, warnings, perModule);
     }
 
     private static double dewPointK(CoolingCase c) {
