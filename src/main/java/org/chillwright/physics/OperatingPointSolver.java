@@ -44,10 +44,10 @@ public final class OperatingPointSolver {
     static final double TEMPERATURE_ACCURACY_K = 1e-9;
     /**
      * Iteration cap. Near a double root (load exactly at the peak) Newton only halves the error per
-     * step, so 200 steps reach round-off from any start; well-posed cases take 4 to 8.
+     * step, so 200 steps reach round-off from any start; well-posed cases take 2 to 8.
      */
     static final int MAX_ITERATIONS = 200;
-    /** Cap for the 2-D Newton on the capacity peak: it converges in 3 to 6 steps from the starts used, or is abandoned. */
+    /** Cap for the 2-D Newton on the capacity peak: it converges in 2 to 6 steps from the starts used, or is abandoned. */
     static final int NEWTON_2D_ITERATIONS = 30;
     /** Evaluation cap for the generic Brent root in the fixed-voltage drive; each evaluation is a 2x2 solve. */
     static final int MAX_EVALUATIONS = 500;
@@ -391,7 +391,7 @@ public final class OperatingPointSolver {
      * @param curvatureWPerA2  Qc_II = ∂²Qc/∂I², W/A², &lt; 0
      */
     record PeakPoint(double currentA, double coldSideK, double heatW, double sensitivityWPerK,
-                             double crossSlopeWPerAK, double curvatureWPerA2) {
+                     double crossSlopeWPerAK, double curvatureWPerA2) {
 
         /** The point (I, Tc) with its heat and derivatives evaluated there (the fallbacks' end point). */
         static PeakPoint at(double s, double r, double k, double tamb, double rh, double i, double tc) {
@@ -425,10 +425,9 @@ public final class OperatingPointSolver {
             return peak;
         }
         double q = startW;
-        double tc = objectK - q * rc;
         double peakA = seedA;
         for (int n = 0; n < MAX_ITERATIONS; n++) {
-            tc = objectK - q * rc;
+            double tc = objectK - q * rc;
             peakA = peakCurrentA(s, r, k, tc, tamb, rh, peakA);
             double surplusW = coldHeatW(s, r, k, tc, tamb, rh, peakA) - q;
             double slope = 1 + rc * coldSideSensitivityWPerK(s, k, rh, peakA);
@@ -438,9 +437,7 @@ public final class OperatingPointSolver {
                 break;
             }
         }
-        PeakPoint end = PeakPoint.at(s, r, k, tamb, rh, peakA, tc);
-        return new PeakPoint(peakA, objectK - q * rc, q, end.sensitivityWPerK(), end.crossSlopeWPerAK(),
-                end.curvatureWPerA2());
+        return PeakPoint.at(s, r, k, tamb, rh, peakA, objectK - q * rc);
     }
 
     /**

@@ -106,6 +106,17 @@ class OperatingPointSolverTest {
         assertThat(restarted.currentA()).isCloseTo(point.currentAtMaxHeatLoadA(), within(1e-9));
     }
 
+    @Test
+    void capacityFallsBackToTheNestedIterationWhenBothNewtonStartsFail() {
+        // A start of 3000 W puts the restart's cold face at 278.15 − 300 K, below absolute zero, so only the
+        // nested iteration in Q is left; it must reach the same capacity.
+        Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
+        OperatingPointSolver.PeakPoint nested = OperatingPointSolver.capacityAtObject(0.04, 2.4, 0.25, 278.15,
+                0.1, 298.15, 0.35, 3000, 100, 277.15);
+        assertThat(nested.heatW()).isCloseTo(point.maxHeatLoadW(), within(1e-6));
+        assertThat(nested.currentA()).isCloseTo(point.currentAtMaxHeatLoadA(), within(1e-6));
+    }
+
     @ParameterizedTest
     @MethodSource("overDrivenCurrents")
     void capacityAndMarginDependOnlyOnTheObjectTemperatureAndLoad(double currentA) {
