@@ -49,7 +49,8 @@ public record ModuleArray(ModuleParameters module, int seriesCount, int parallel
 
     /** The equivalent single module seen at the array terminals ({@link ModuleParameters#inArray}). */
     public ModuleParameters equivalent() {
-        return module.inArray(seriesCount, parallelCount);
+        // a single module is its own equivalent: skip building an equal copy on every solve
+        return seriesCount == 1 && parallelCount == 1 ? module : module.inArray(seriesCount, parallelCount);
     }
 
     /**

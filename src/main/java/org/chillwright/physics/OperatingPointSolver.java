@@ -28,16 +28,26 @@ public final class OperatingPointSolver {
      * accuracy physics.md asks for at currents of 0.1 A and up.
      */
     static final double CURRENT_ACCURACY_A = 1e-9;
+    /**
+     * The lower-root Newton also stops once the error it estimates after a step, ½|Qc''|·ΔI²/Qc', is
+     * below this, A. The estimate is the leading term of the next step, so it is accepted only with a
+     * thousandfold margin on {@link #CURRENT_ACCURACY_A}: 1e-12 A, 1e-12 relative at 1 A.
+     */
+    static final double ROOT_ERROR_A = 1e-12;
     /** The capacity iteration stops once a step in heat is below this, W: 1 nW against loads of mW and up. */
     static final double HEAT_ACCURACY_W = 1e-9;
-    /** The lowest-object-temperature iteration stops once a step is below this, K: 1 nK against a shown 0.01 K. */
+    /**
+     * The lowest-object-temperature iteration stops once a step is below this, K: 1 nK against a shown
+     * 0.01 K. The 2-D Newton on the peak also stops once its estimated remaining error is below this
+     * (in Tc) and below {@link #CURRENT_ACCURACY_A} (in I), see {@link #settled}.
+     */
     static final double TEMPERATURE_ACCURACY_K = 1e-9;
     /**
      * Iteration cap. Near a double root (load exactly at the peak) Newton only halves the error per
-     * step, so 200 steps reach round-off from any start; well-posed cases take 4 to 8.
+     * step, so 200 steps reach round-off from any start; well-posed cases take 2 to 8.
      */
     static final int MAX_ITERATIONS = 200;
-    /** Cap for the 2-D Newton on the capacity peak: it converges in 3 to 6 steps from the starts used, or is abandoned. */
+    /** Cap for the 2-D Newton on the capacity peak: it converges in 2 to 6 steps from the starts used, or is abandoned. */
     static final int NEWTON_2D_ITERATIONS = 30;
     /** Evaluation cap for the generic Brent root in the fixed-voltage drive; each evaluation is a 2x2 solve. */
     static final int MAX_EVALUATIONS = 500;
@@ -204,12 +214,17 @@ public final class OperatingPointSolver {
      * (load above the capacity peak, ΔT beyond reach, or a cold face at or below 0 K). Allocation-free,
      * for ranking. Arguments are not checked.
      *
-     * <p>Newton from I = 0 with the analytic derivative. Qc(I) is concave on [0, I_run)
-     * (physics.md e), so every tangent lies above the curve: from a point left of the lower root each
-     * Newton step lands at or left of that root, and the iterates rise monotonically to it, never
-     * reaching the upper root. If the slope becomes ≤ 0 (or the step passes the runaway current)
-     * before the load is reached, the iterates have passed the peak below the load, which only
-     * happens when the load is above capacity.
+     * <p>Newton with the analytic derivative, started at the smaller root of the second-order Taylor
+     * polynomial of Qc at I = 0. In d = 1 + Rh·K − Rh·S·I, which is linear in I, Th(I) = α/d + β + γ·d
+     * with α = Th·d at the runaway current, α ≥ 0; so Th‴ = 6α(Rh·S)³/d⁴ ≥ 0 and Qc‴ = −K·Th‴ ≤ 0.
+     * Qc″ therefore only falls as I grows, the Taylor polynomial lies on or above Qc for I ≥ 0, and
+     * its root is at or left of the lower root. With an ideal sink (Rh = 0) Qc is exactly that
+     * quadratic and the start is the closed form of physics.md e (case S09), which the first step only
+     * confirms. Qc(I) is concave on [0, I_run) (physics.md e), so every tangent lies above the curve:
+     * from a point left of the lower root each Newton step lands at or left of that root, and the
+     * iterates rise monotonically to it, never reaching the upper root. If the slope becomes ≤ 0 (or
+     * the step passes the runaway current) before the load is reached, the iterates have passed the
+     * peak below the load, which only happens when the load is above capacity.
      *
      * @param seebeckVPerK     S, V/K
      * @param resistanceOhm    R, Ω
@@ -229,24 +244,45 @@ public final class OperatingPointSolver {
         if (!(tc > 0)) {
             return Double.NaN;
         }
-        double i = 0;
+        // Qc − Qload and its first two derivatives at I = 0, where d = 1 + Rh·K
+        double perD0 = 1 / (1 + rh * k);
+        double th0 = (ambientK + rh * k * tc) * perD0;
+        double surplus0 = -k * (th0 - tc) - heatLoadW;
+        if (surplus0 >= 0) {
+            return 0.0; // passive: conduction alone carries the load
+        }
+        double thSlope0 = rh * s * th0 * perD0;
+        double slope0 = s * tc - k * thSlope0;
+        if (!(slope0 > 0)) {
+            return Double.NaN; // concave and already falling at zero current: no current helps
+        }
+        double curvature0 = -r - k * rh * (r + 2 * s * thSlope0) * perD0;
+        // Smaller root of surplus0 + slope0·I + ½·curvature0·I² = 0 in cancellation-free form. If the
+        // polynomial never reaches the load, the load is above capacity; Newton from I = 0 still
+        // decides it, so that round-off in the bound can never refuse a feasible load.
+        double discriminant = slope0 * slope0 - 2 * curvature0 * surplus0;
+        double i = discriminant >= 0 ? -2 * surplus0 / (slope0 + Math.sqrt(discriminant)) : 0.0;
         for (int n = 0; n < MAX_ITERATIONS; n++) {
             double d = 1 + rh * k - rh * s * i;            // denominator of Th(I)
             if (!(d > 0)) {
                 return Double.NaN;
             }
-            double th = (ambientK + rh * (0.5 * r * i * i + k * tc)) / d;
+            double perD = 1 / d;                           // one division serves Th and Th'
+            double rhPerD = rh * perD;                     // formed beside Th, so fewer products wait on Th
+            double th = (ambientK + rh * (0.5 * r * i * i + k * tc)) * perD;
             double surplusW = s * i * tc - 0.5 * r * i * i - k * (th - tc) - heatLoadW;
-            if (n == 0 && surplusW >= 0) {
-                return 0.0; // passive: conduction alone carries the load
-            }
-            double slope = s * tc - r * i - k * rh * (r * i + s * th) / d; // dQc/dI = S·Tc − R·I − K·Th'(I)
+            double thSlope = rhPerD * (r * i + s * th);                     // Th'(I)
+            double slope = s * tc - r * i - k * thSlope;                    // dQc/dI = S·Tc − R·I − K·Th'(I)
             if (!(slope > 0)) {
                 return Double.NaN;
             }
             double step = -surplusW / slope;
             i += step;
-            if (Math.abs(step) <= CURRENT_ACCURACY_A) {
+            // Taylor: the surplus left after the step is ½·Qc''·ΔI², so about ½|Qc''|·ΔI²/Qc' of current is
+            // still missing; compared without a division. Near a double root (slope → 0) only the step
+            // test ends the iteration, as before.
+            double curvature = -r - k * rhPerD * (r + 2 * s * thSlope);    // d²Qc/dI² < 0
+            if (Math.abs(step) <= CURRENT_ACCURACY_A || -0.5 * curvature * step * step <= ROOT_ERROR_A * slope) {
                 return i;
             }
         }
@@ -345,19 +381,51 @@ public final class OperatingPointSolver {
     }
 
     /**
-     * Most heat removable with the object held at {@code objectK}: the root Q of
-     * Qpk(Tobj − Q·Rint,c) = Q. Newton in Q with slope −(1 + Rint,c·∂Qc/∂Tc); Qpk is convex in Tc (a
-     * maximum of affine functions), so from a start with Qpk(…) ≥ Q the iterates rise monotonically.
+     * A point on the capacity peak dQc/dI = 0, with the derivatives there that seed the next solve.
+     *
+     * @param currentA         I at the peak, A
+     * @param coldSideK        Tc, K
+     * @param heatW            Qc at the peak, W
+     * @param sensitivityWPerK B = ∂Qc/∂Tc, W/K (the slope of the peak value against Tc, envelope theorem)
+     * @param crossSlopeWPerAK B' = ∂²Qc/∂I∂Tc, W/(A·K)
+     * @param curvatureWPerA2  Qc_II = ∂²Qc/∂I², W/A², &lt; 0
      */
-    private static CapacityPeak capacityAtObject(double s, double r, double k, double objectK, double rc,
-                                                 double tamb, double rh, double startW, double peakGuessA) {
+    record PeakPoint(double currentA, double coldSideK, double heatW, double sensitivityWPerK,
+                     double crossSlopeWPerAK, double curvatureWPerA2) {
+
+        /** The point (I, Tc) with its heat and derivatives evaluated there (the fallbacks' end point). */
+        static PeakPoint at(double s, double r, double k, double tamb, double rh, double i, double tc) {
+            double perD = 1 / (1 + rh * k - rh * s * i);
+            double th = (tamb + rh * (0.5 * r * i * i + k * tc)) * perD;
+            double thSlope = rh * (r * i + s * th) * perD;
+            double ratio = rh * k * perD;
+            return new PeakPoint(i, tc, s * i * tc - 0.5 * r * i * i - k * (th - tc), s * i + k * (1 - ratio),
+                    s * (1 - ratio * ratio), -r - k * rh * (r + 2 * s * thSlope) * perD);
+        }
+    }
+
+    /**
+     * Most heat removable with the object held at {@code objectK}: the root Q of
+     * Qpk(Tobj − Q·Rint,c) = Q, by 2-D Newton on the peak from (seedA, seedK). A seed extrapolated
+     * far from the solved point can leave the domain; then the 2-D Newton starts again from the
+     * bracketed peak at the cold face Tobj − startW·Rint,c. If that fails too, Newton in Q with slope
+     * −(1 + Rint,c·∂Qc/∂Tc) from {@code startW}; Qpk is convex in Tc (a maximum of affine functions),
+     * so from a start with Qpk(…) ≥ Q the iterates rise monotonically.
+     */
+    static PeakPoint capacityAtObject(double s, double r, double k, double objectK, double rc, double tamb,
+                                      double rh, double startW, double seedA, double seedK) {
         // Tc + Rint,c·Qc(I, Tc) = Tobj on the peak dQc/dI = 0
-        double[] peak = peakOnLine(s, r, k, tamb, rh, 1, rc, objectK, peakGuessA, objectK - startW * rc);
+        PeakPoint peak = peakOnLine(s, r, k, tamb, rh, 1, rc, objectK, seedA, seedK);
         if (peak != null) {
-            return new CapacityPeak(peak[0], coldHeatW(s, r, k, peak[1], tamb, rh, peak[0]));
+            return peak;
+        }
+        double startK = objectK - startW * rc;
+        peak = peakOnLine(s, r, k, tamb, rh, 1, rc, objectK, peakCurrentA(s, r, k, startK, tamb, rh, seedA), startK);
+        if (peak != null) {
+            return peak;
         }
         double q = startW;
-        double peakA = peakGuessA;
+        double peakA = seedA;
         for (int n = 0; n < MAX_ITERATIONS; n++) {
             double tc = objectK - q * rc;
             peakA = peakCurrentA(s, r, k, tc, tamb, rh, peakA);
@@ -369,31 +437,56 @@ public final class OperatingPointSolver {
                 break;
             }
         }
-        return new CapacityPeak(peakA, q);
+        return PeakPoint.at(s, r, k, tamb, rh, peakA, objectK - q * rc);
     }
 
     /**
-     * Lowest cold face, K, at which the load is still removed with I ≤ limitA: root of
-     * Qc(min(I_pk(Tc), limit), Tc) = Q. That capacity is convex and increasing in Tc, so Newton from
-     * the solved (feasible) Tc descends monotonically to the root.
+     * Lowest cold face, K, at which the load is still removed with the current held at
+     * {@code limitA}, when that limit binds: Qc = a + B·Tc is affine in Tc at fixed I, so the cold face
+     * at which the limit current pumps exactly the load is a closed form from the solved (feasible)
+     * {@code startK}; the limit binds there when the peak lies at or beyond it (dQc/dI ≥ 0). NaN when
+     * it does not bind (or there is no limit, or the limit is at or beyond the runaway current).
+     * Independent of the capacity, so it is computed before that iteration and overlaps with it.
      */
-    private static double lowestColdSideK(double s, double r, double k, double tamb, double rh, double loadW,
-                                          double limitA, double startK, double peakGuessA) {
-        if (limitA < Double.POSITIVE_INFINITY) {
-            // Qc is affine in Tc at fixed I: the cold face at which the limit current pumps exactly the load.
-            double atLimitK = startK + (loadW - coldHeatW(s, r, k, startK, tamb, rh, limitA))
-                    / coldSideSensitivityWPerK(s, k, rh, limitA);
-            if (atLimitK > 0 && limitA < runawayCurrentA(s, k, rh)
-                    && coldHeatSlope(s, r, k, atLimitK, tamb, rh, limitA) >= 0) {
-                return atLimitK; // the peak there lies at or beyond the limit, so the limit binds
-            }
+    private static double coldSideAtCurrentLimitK(double s, double r, double k, double tamb, double rh, double loadW,
+                                                  double limitA, double startK) {
+        double dAtLimit = 1 + rh * k - rh * s * limitA;
+        if (!(limitA < Double.POSITIVE_INFINITY && dAtLimit > 0)) { // d > 0: the limit is below the runaway current
+            return Double.NaN;
         }
-        double[] peak = peakOnLine(s, r, k, tamb, rh, 0, 1, loadW, peakGuessA, startK); // Qc(I, Tc) = Q on the peak
+        double perD = 1 / dAtLimit; // every term at the limit current shares 1/d
+        double sensitivity = s * limitA + k * (1 - rh * s * limitA) * perD;
+        double startHotK = (tamb + rh * (0.5 * r * limitA * limitA + k * startK)) * perD;
+        double startW = s * limitA * startK - 0.5 * r * limitA * limitA - k * (startHotK - startK);
+        double atLimitK = startK + (loadW - startW) / sensitivity;
+        double hotK = (tamb + rh * (0.5 * r * limitA * limitA + k * atLimitK)) * perD;
+        double slope = s * atLimitK - r * limitA - k * rh * (r * limitA + s * hotK) * perD;
+        return atLimitK > 0 && slope >= 0 ? atLimitK : Double.NaN;
+    }
+
+    /**
+     * Lowest cold face, K, at which the load is still removed with I ≤ limitA when the limit does not
+     * bind (see {@link #coldSideAtCurrentLimitK}): root of Qc(min(I_pk(Tc), limit), Tc) = Q, a
+     * capacity convex and increasing in Tc. The peak on the line Qc = Q, by 2-D Newton from a
+     * second-order step along the peak from {@code capacity}, or, if that fails, Newton in Tc from the
+     * solved (feasible) {@code startK}, which descends monotonically to the root.
+     */
+    static double lowestColdSideK(double s, double r, double k, double tamb, double rh, double loadW, double limitA,
+                                  double startK, PeakPoint capacity) {
+        // Along the peak Qpk(Tc + δ) ≈ Qpk + B·δ + ½G·δ², G = B'²/(−Qc_II) (envelope theorem and
+        // dI_pk/dTc = −B'/Qc_II): its root nearest δ = 0 and the matching current start the Newton.
+        double b = capacity.sensitivityWPerK();
+        double g = capacity.crossSlopeWPerAK() * capacity.crossSlopeWPerAK() / -capacity.curvatureWPerA2();
+        double gapW = capacity.heatW() - loadW;
+        double discriminant = Math.max(0.0, b * b - 2 * g * gapW); // clipped: a cruder seed, not a wrong one
+        double deltaK = -2 * gapW / (b + Math.sqrt(discriminant));
+        double seedA = capacity.currentA() - capacity.crossSlopeWPerAK() / capacity.curvatureWPerA2() * deltaK;
+        PeakPoint peak = peakOnLine(s, r, k, tamb, rh, 0, 1, loadW, seedA, capacity.coldSideK() + deltaK);
         if (peak != null) {
-            return peak[1];
+            return peak.coldSideK();
         }
         double tc = startK;
-        double peakA = peakGuessA;
+        double peakA = capacity.currentA();
         for (int n = 0; n < MAX_ITERATIONS; n++) {
             peakA = peakCurrentA(s, r, k, tc, tamb, rh, peakA);
             double i = Math.min(peakA, limitA);
@@ -415,25 +508,29 @@ public final class OperatingPointSolver {
      * The capacity peak on a line in (Tc, Qc): solves α·Tc + β·Qc(I, Tc) = γ together with
      * dQc/dI = 0 by 2-D Newton in (I, Tc) with the analytic Jacobian
      * [[β·Qc_I, α + β·B], [Qc_II, B']], where B = ∂Qc/∂Tc and B' = S(1 − (Rh·K/d)²). Quadratic from the
-     * nearby start the callers give. Returns {I, Tc}, or null when an iterate leaves the physical
-     * domain (I &lt; 0, Tc ≤ 0, beyond runaway) or it does not settle, so that the caller falls back to
-     * its nested bracketed iteration.
+     * nearby start the callers give. Returns the peak point, or null when an iterate leaves the
+     * physical domain (I &lt; 0, Tc ≤ 0, beyond runaway) or it does not settle, so that the caller falls
+     * back to its nested bracketed iteration. Each step waits on two divisions: 1/d, then the two by det.
      */
-    private static double[] peakOnLine(double s, double r, double k, double tamb, double rh, double alpha,
-                                       double beta, double gamma, double i, double tc) {
+    private static PeakPoint peakOnLine(double s, double r, double k, double tamb, double rh, double alpha,
+                                        double beta, double gamma, double i, double tc) {
+        double previousA = Double.NaN;
+        double previousK = Double.NaN;
         for (int n = 0; n < NEWTON_2D_ITERATIONS; n++) {
             double d = 1 + rh * k - rh * s * i;
             if (!(d > 0 && tc > 0 && i >= 0)) {
                 return null;
             }
-            double th = (tamb + rh * (0.5 * r * i * i + k * tc)) / d;
-            double thSlope = rh * (r * i + s * th) / d;
+            double perD = 1 / d;
+            double rhPerD = rh * perD;          // formed beside Th, so fewer products wait on Th and Th'
+            double th = (tamb + rh * (0.5 * r * i * i + k * tc)) * perD;
+            double thSlope = rhPerD * (r * i + s * th);
             double qc = s * i * tc - 0.5 * r * i * i - k * (th - tc);
-            double slope = s * tc - r * i - k * thSlope;                  // Qc_I
-            double curvature = -r - k * rh * (r + 2 * s * thSlope) / d;   // Qc_II
-            double ratio = rh * k / d;
-            double sensitivity = s * i + k * (1 - ratio);                 // B = ∂Qc/∂Tc
-            double crossSlope = s * (1 - ratio * ratio);                  // B' = ∂Qc_I/∂Tc
+            double slope = s * tc - r * i - k * thSlope;                     // Qc_I
+            double curvature = -r - k * rhPerD * (r + 2 * s * thSlope);      // Qc_II
+            double ratio = k * rhPerD;
+            double sensitivity = s * i + k * (1 - ratio);                    // B = ∂Qc/∂Tc
+            double crossSlope = s * (1 - ratio * ratio);                     // B' = ∂Qc_I/∂Tc
             double f1 = alpha * tc + beta * qc - gamma;
             double j11 = beta * slope;
             double j12 = alpha + beta * sensitivity;
@@ -441,15 +538,38 @@ public final class OperatingPointSolver {
             if (!(det != 0)) {
                 return null;
             }
-            double stepA = (-f1 * crossSlope + slope * j12) / det;
-            double stepK = (-slope * j11 + f1 * curvature) / det;
+            double stepA = (-f1 * crossSlope + slope * j12) / det; // two divisions side by side are as
+            double stepK = (-slope * j11 + f1 * curvature) / det;  // fast as one, and save a product
             i += stepA;
             tc += stepK;
-            if (Math.abs(stepA) <= CURRENT_ACCURACY_A && Math.abs(stepK) <= TEMPERATURE_ACCURACY_K) {
-                return i >= 0 && tc > 0 ? new double[] {i, tc} : null;
+            boolean small = Math.abs(stepA) <= CURRENT_ACCURACY_A && Math.abs(stepK) <= TEMPERATURE_ACCURACY_K;
+            if (small || settled(stepA, previousA, CURRENT_ACCURACY_A)
+                    && settled(stepK, previousK, TEMPERATURE_ACCURACY_K)) {
+                if (!(i >= 0 && tc > 0)) {
+                    return null;
+                }
+                // Qc at the new point by its second-order Taylor polynomial (∂²Qc/∂Tc² = 0, Qc is affine in
+                // Tc): the neglected third-order terms are far below the accuracy for steps that small,
+                // and a second evaluation of Th is saved.
+                double heatW = qc + slope * stepA + sensitivity * stepK
+                        + 0.5 * curvature * stepA * stepA + crossSlope * stepA * stepK;
+                return new PeakPoint(i, tc, heatW, sensitivity, crossSlope, curvature);
             }
+            previousA = stepA;
+            previousK = stepK;
         }
         return null;
+    }
+
+    /**
+     * Whether the error left after a Newton step Δn is within {@code accuracy}. While the iteration
+     * contracts, θ = |Δn|/|Δn−1| &lt; 1, the rest of the steps sum to at most θ/(1 − θ)·|Δn| (the
+     * stopping rule of E. Hairer &amp; G. Wanner, Solving Ordinary Differential Equations II, 1996,
+     * sec. IV.8, from memory); Newton contracts faster as it converges, so this overestimates. Written
+     * without division: |Δn|² ≤ accuracy·(|Δn−1| − |Δn|). False on the first step (Δn−1 is NaN).
+     */
+    private static boolean settled(double step, double previousStep, double accuracy) {
+        return step * step <= accuracy * (Math.abs(previousStep) - Math.abs(step));
     }
 
     private static double fixedCurrentDeterminant(double s, double k, double rh, double i) {
@@ -500,8 +620,9 @@ public final class OperatingPointSolver {
                             + " even with no load: the best it does there is %.2f W at %.2f A",
                     coldK, Units.celsiusFromKelvin(coldK), ambientK, rh, peakW, peakA));
         }
-        CapacityPeak atObject = capacityAtObject(s, r, k, c.objectK(), c.coldInterfaceKPerW(), ambientK, rh,
-                Math.min(c.heatLoadW(), peakW), peakA);
+        double startW = Math.min(c.heatLoadW(), peakW);
+        PeakPoint atObject = capacityAtObject(s, r, k, c.objectK(), c.coldInterfaceKPerW(), ambientK, rh, startW,
+                peakA, c.objectK() - startW * c.coldInterfaceKPerW());
         return new Infeasible(Reason.LOAD_ABOVE_CAPACITY, format(
                 "needs %.2f W of cooling at a cold face of %.2f K; with this heat sink the peak there is %.2f W"
                         + " at %.2f A, and at most %.2f W can be removed while holding the object at %.2f K (%.2f °C)",
@@ -521,20 +642,38 @@ public final class OperatingPointSolver {
         double powerW = currentA * voltageV;
         double rejectedW = loadW + powerW;
         double cop = powerW > 0 ? loadW / powerW : Double.POSITIVE_INFINITY;
-
-        double peakA = peakCurrentA(s, r, k, coldK, ambientK, rh, currentA);
-        double peakW = coldHeatW(s, r, k, coldK, ambientK, rh, peakA);
-        CapacityPeak atObject = capacityAtObject(s, r, k, objectK, rc, ambientK, rh, Math.min(loadW, peakW), peakA);
-        double lowestColdK = lowestColdSideK(s, r, k, ambientK, rh, loadW, limits.currentLimitA(), coldK, peakA);
-        double marginK = objectK - (lowestColdK + loadW * rc);
-
+        // Everything that does not wait for the capacity and margin iterations comes first: its
+        // divisions and square roots then overlap with those latency-bound iterations in the core.
         double dewPointK = dewPointK(c);
         List<Warning> warnings = warnings(module, limits, currentA, coldK, hotK, dewPointK);
         double fractionOfImax = limits.hasRatedImax() ? currentA / limits.ratedImaxA() : Double.NaN;
+        double copOptimalA = module.copOptimalCurrentA(coldK, hotK);
+        double maxCop = module.maxCop(coldK, hotK);
+        ModuleShare perModule = array.share(currentA, voltageV, loadW, rejectedW, powerW);
+
+        // Start of the capacity peak: Qc' is concave in I (Qc‴ ≤ 0, see currentForLoadA), and the root
+        // nearest zero of its second-order Taylor polynomial at the solved current is a near-peak
+        // current. Th'' and Th‴ = 3·Rh·S·Th''/d follow from Th' without another division.
+        double perD = 1 / (1 + rh * k - rh * s * currentA);
+        double thSlope = rh * (r * currentA + s * hotK) * perD;          // Th'
+        double thCurvature = rh * (r + 2 * s * thSlope) * perD;          // Th''
+        double slope = s * coldK - r * currentA - k * thSlope;           // Qc'
+        double curvature = -r - k * thCurvature;                         // Qc'' < 0
+        double thirdDerivative = -3 * k * rh * s * thCurvature * perD;   // Qc‴ ≤ 0
+        // The discriminant is ≥ Qc''² left of the peak (Qc' > 0, Qc‴ ≤ 0); only over-driven fixed-current
+        // points can make it negative, and clipping it at zero there just gives a cruder seed.
+        double discriminant = Math.max(0.0, curvature * curvature - 2 * thirdDerivative * slope);
+        double towardPeakA = -2 * slope / (curvature - Math.sqrt(discriminant));
+        double seedA = Math.max(0.0, currentA + towardPeakA);
+        double limitA = limits.currentLimitA();
+        double atLimitK = coldSideAtCurrentLimitK(s, r, k, ambientK, rh, loadW, limitA, coldK);
+        PeakPoint atObject = capacityAtObject(s, r, k, objectK, rc, ambientK, rh, loadW, seedA, coldK);
+        double lowestColdK = Double.isNaN(atLimitK)
+                ? lowestColdSideK(s, r, k, ambientK, rh, loadW, limitA, coldK, atObject)
+                : atLimitK;
+        double marginK = objectK - (lowestColdK + loadW * rc);
         return new Solved(currentA, voltageV, powerW, cop, objectK, coldK, hotK, rejectedW, loadW, fractionOfImax,
-                atObject.heatW(), atObject.currentA(), marginK, module.copOptimalCurrentA(coldK, hotK),
-                module.maxCop(coldK, hotK), dewPointK, warnings,
-                array.share(currentA, voltageV, loadW, rejectedW, powerW));
+                atObject.heatW(), atObject.currentA(), marginK, copOptimalA, maxCop, dewPointK, warnings, perModule);
     }
 
     private static double dewPointK(CoolingCase c) {

@@ -71,6 +71,22 @@ class OperatingPointSolverTest {
     }
 
     @Test
+    void fastPathWithAnIdealSinkIsTheClosedForm() {
+        // Source: physics.md e, Rh = 0 closed form (case S09): Qc is then exactly quadratic, so the
+        // Taylor start of the Newton iteration is already the root.
+        double hotK = 298.15;
+        double fastA = OperatingPointSolver.currentForLoadA(0.04, 2.4, 0.25, 277.15, hotK, 0, 10);
+        assertThat(fastA).isCloseTo(TM_A.currentForLoadA(10, 277.15, hotK).orElseThrow(), within(1e-12));
+    }
+
+    @Test
+    void fastPathIsNaNWhenEvenTheTaylorBoundStaysBelowTheLoad() {
+        // The quadratic bound at I = 0 peaks at 14.21 W for Tc = 275.65 K (its coefficients at I = 0); 15 W is
+        // above it, so the iteration starts from zero and runs past the peak.
+        assertThat(OperatingPointSolver.currentForLoadA(0.04, 2.4, 0.25, 275.65, 298.15, 0.35, 15)).isNaN();
+    }
+
+    @Test
     void maxHeatLoadIsTheEdgeOfFeasibility() {
         // Self-consistency: just below the reported capacity the load is solved, just above it is not.
         Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
@@ -78,6 +94,43 @@ class OperatingPointSolverTest {
         assertThat(solver.solve(TM_A, S10.withHeatLoadW(maxW * (1 - 1e-6)), DriveLimits.NONE).feasible()).isTrue();
         assertThat(infeasible(solver.solve(TM_A, S10.withHeatLoadW(maxW * (1 + 1e-6)), DriveLimits.NONE)).reason())
                 .isEqualTo(Reason.LOAD_ABOVE_CAPACITY);
+    }
+
+    @Test
+    void capacityRestartsFromTheBracketedPeakWhenItsSeedLeavesTheDomain() {
+        // A seed beyond the runaway current (1 + Rh·K)/(Rh·S) = 77.7 A makes the first 2-D Newton give up.
+        Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
+        OperatingPointSolver.PeakPoint restarted = OperatingPointSolver.capacityAtObject(0.04, 2.4, 0.25, 278.15,
+                0.1, 298.15, 0.35, 10, 100, 277.15);
+        assertThat(restarted.heatW()).isCloseTo(point.maxHeatLoadW(), within(1e-9));
+        assertThat(restarted.currentA()).isCloseTo(point.currentAtMaxHeatLoadA(), within(1e-9));
+    }
+
+    @Test
+    void capacityFallsBackToTheNestedIterationWhenBothNewtonStartsFail() {
+        // A start of 3000 W puts the restart's cold face at 278.15 − 300 K, below absolute zero, so only the
+        // nested iteration in Q is left; it must reach the same capacity.
+        Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
+        OperatingPointSolver.PeakPoint nested = OperatingPointSolver.capacityAtObject(0.04, 2.4, 0.25, 278.15,
+                0.1, 298.15, 0.35, 3000, 100, 277.15);
+        assertThat(nested.heatW()).isCloseTo(point.maxHeatLoadW(), within(1e-6));
+        assertThat(nested.currentA()).isCloseTo(point.currentAtMaxHeatLoadA(), within(1e-6));
+    }
+
+    @ParameterizedTest
+    @MethodSource("overDrivenCurrents")
+    void capacityAndMarginDependOnlyOnTheObjectTemperatureAndLoad(double currentA) {
+        // At a fixed current beyond the peak (3.8 A) the capacity search starts on the falling side of
+        // Qc(I); the answers must still be those of the same object temperature and load.
+        var c = new CoolingCase(278.15, 298.15, 10, 0.3, 0.1, 0.05);
+        Solved driven = solved(solver.atCurrent(ModuleArray.single(TM_A), c, DriveLimits.NONE, currentA));
+        Solved designed = solved(solver.solve(TM_A, objectAt(driven.objectK()), DriveLimits.NONE));
+        assertThat(driven.maxHeatLoadW()).isCloseTo(designed.maxHeatLoadW(), within(1e-9));
+        assertThat(driven.marginK()).isCloseTo(designed.marginK(), within(1e-9));
+    }
+
+    static Stream<Double> overDrivenCurrents() {
+        return Stream.of(4.5, 6.0);
     }
 
     @Test
