@@ -3,6 +3,7 @@ package org.chillwright.selection;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.List;
 import java.util.stream.IntStream;
 import org.chillwright.physics.CoolingCase;
 import org.chillwright.physics.DriveLimits;
@@ -118,17 +119,20 @@ public final class RankingEngine {
                 };
             }
         }
-        long[] order = sortedByKey(feasible, key);
-        boolean[] pareto = paretoFront(feasible, arrayCost, loadW, powerW);
+        // only the first `limit` designs need ordering: select them, sort those, and sort the rest only if
+        // the margin filter drops enough of them that the walk runs past the sorted prefix
+        long[] order = packed(feasible, key);
+        int sorted = sortSmallest(order, key, Math.min(order.length, rankingCase.limit()));
 
-        var candidates = new ArrayList<Ranking.Candidate>();
+        var picked = new ArrayList<int[]>(); // {design, row} of the shown designs, best first
         var shown = new boolean[n];
         var belowMargin = new boolean[n];
-        for (long packed : order) {
-            if (candidates.size() >= rankingCase.limit()) {
-                break;
+        var points = new ArrayList<Solved>();
+        for (int j = 0; j < order.length && picked.size() < rankingCase.limit(); j++) {
+            if (j == sorted) {
+                sorted = sortSmallest(order, key, order.length);
             }
-            int d = (int) packed;
+            int d = (int) order[j];
             Solved point = detailed[d] != null ? detailed[d] : fullSolve(table, configs, d, rankingCase, c);
             int i = d / configs.length;
             if (point.marginK() < rankingCase.minMarginK()) {
@@ -136,10 +140,19 @@ public final class RankingEngine {
                 continue;
             }
             shown[i] = true;
+            picked.add(new int[] {d, i});
+            points.add(point);
+        }
+        boolean[] pareto = paretoFrontOf(picked, feasible, arrayCost, loadW, powerW);
+        var candidates = new ArrayList<Ranking.Candidate>(picked.size());
+        for (int j = 0; j < picked.size(); j++) {
+            int d = picked.get(j)[0];
+            int i = picked.get(j)[1];
+            Solved point = points.get(j);
             double requiredSink = rankingCase.sizesTheSink() ? rankingCase.sinkRiseK() / point.heatRejectedW()
                     : Double.NaN;
-            candidates.add(new Ranking.Candidate(candidates.size() + 1, table.moduleIds()[i], configs[d % configs.length][0],
-                    configs[d % configs.length][1], point, unitPrice[d], arrayCost[d], pareto[d], requiredSink));
+            candidates.add(new Ranking.Candidate(j + 1, table.moduleIds()[i], configs[d % configs.length][0],
+                    configs[d % configs.length][1], point, unitPrice[d], arrayCost[d], pareto[j], requiredSink));
         }
 
         var rejections = new ArrayList<Ranking.Rejection>();
@@ -206,20 +219,31 @@ public final class RankingEngine {
     }
 
     /**
-     * Feasible designs in ascending key order. Each is packed into a long: a sortable form of the key
-     * (as a float, ample to order designs) above the design index, so one primitive sort orders them.
+     * Feasible designs packed for sorting: a sortable form of the key (as a float, ample to order designs)
+     * above the design index, so that one primitive sort orders them without boxing.
      */
-    private static long[] sortedByKey(int[] designs, double[] key) {
+    private static long[] packed(int[] designs, double[] key) {
         long[] packed = new long[designs.length];
         for (int j = 0; j < designs.length; j++) {
             int d = designs[j];
             packed[j] = ((long) sortableBits((float) key[d]) << 32) | (d & 0xffffffffL);
         }
-        Arrays.sort(packed);
+        return packed;
+    }
+
+    /**
+     * Puts the {@code count} smallest packed designs first, in exact key order, and returns
+     * {@code count}. Quickselect partitions in linear time, so only the prefix pays for a sort.
+     */
+    static int sortSmallest(long[] packed, double[] key, int count) {
+        if (count < packed.length) {
+            select(packed, count);
+        }
+        Arrays.sort(packed, 0, count);
         // designs whose keys round to the same float: order them by the exact key (runs are short)
-        for (int start = 0; start < packed.length; ) {
+        for (int start = 0; start < count; ) {
             int end = start + 1;
-            while (end < packed.length && (packed[end] >>> 32) == (packed[start] >>> 32)) {
+            while (end < count && (packed[end] >>> 32) == (packed[start] >>> 32)) {
                 end++;
             }
             for (int j = start + 1; j < end; j++) {
@@ -233,46 +257,115 @@ public final class RankingEngine {
             }
             start = end;
         }
-        return packed;
+        return count;
+    }
+
+    /** Rearranges {@code a} so that its {@code k} smallest values come first (Hoare's quickselect). */
+    private static void select(long[] a, int k) {
+        int left = 0;
+        int right = a.length - 1;
+        while (left < right) {
+            long pivot = median(a[left], a[(left + right) >>> 1], a[right]);
+            int i = left;
+            int j = right;
+            while (i <= j) {
+                while (a[i] < pivot) {
+                    i++;
+                }
+                while (a[j] > pivot) {
+                    j--;
+                }
+                if (i <= j) {
+                    long t = a[i];
+                    a[i] = a[j];
+                    a[j] = t;
+                    i++;
+                    j--;
+                }
+            }
+            if (k - 1 <= j) {
+                right = j;
+            } else if (k - 1 >= i) {
+                left = i;
+            } else {
+                return;
+            }
+        }
+    }
+
+    private static long median(long a, long b, long c) {
+        return Math.max(Math.min(a, b), Math.min(Math.max(a, b), c));
+    }
+
+    /**
+     * Which shown designs are on the COP–cost Pareto front of all feasible designs: none cheaper has at
+     * least its COP, and none as cheap has more. One pass over the feasible designs against the shown
+     * costs (sorted, so a binary search places each design) gives, for every shown design, the best COP
+     * strictly cheaper and at equal cost.
+     */
+    private static boolean[] paretoFrontOf(List<int[]> shown, int[] feasible, double[] arrayCost, double loadW,
+                                           double[] powerW) {
+        int k = shown.size();
+        boolean[] front = new boolean[k];
+        double[] costs = shown.stream().mapToDouble(s -> arrayCost[s[0]]).filter(Double::isFinite).sorted().toArray();
+        if (costs.length == 0) {
+            return front;
+        }
+        double[] bestCheaperFrom = new double[costs.length + 1]; // by designs cheaper than costs[b..]
+        double[] bestAtCost = new double[costs.length];
+        Arrays.fill(bestCheaperFrom, Double.NEGATIVE_INFINITY);
+        Arrays.fill(bestAtCost, Double.NEGATIVE_INFINITY);
+        for (int d : feasible) {
+            double cost = arrayCost[d];
+            if (!Double.isFinite(cost)) {
+                continue;
+            }
+            double cop = copOf(loadW, powerW[d]);
+            int above = upperBound(costs, cost);           // shown costs > cost start here
+            bestCheaperFrom[above] = Math.max(bestCheaperFrom[above], cop);
+            int at = above - 1;
+            if (at >= 0 && costs[at] == cost) {
+                bestAtCost[at] = Math.max(bestAtCost[at], cop);
+            }
+        }
+        for (int b = 1; b <= costs.length; b++) {          // cheaper than costs[b] includes cheaper than costs[b-1]
+            bestCheaperFrom[b] = Math.max(bestCheaperFrom[b], bestCheaperFrom[b - 1]);
+        }
+        for (int j = 0; j < k; j++) {
+            int d = shown.get(j)[0];
+            double cost = arrayCost[d];
+            if (!Double.isFinite(cost)) {
+                continue;
+            }
+            int last = upperBound(costs, cost) - 1;           // designs at this cost were counted here
+            int first = last;
+            while (first > 0 && costs[first - 1] == cost) {
+                first--;
+            }
+            double cop = copOf(loadW, powerW[d]);
+            front[j] = bestCheaperFrom[first] < cop && bestAtCost[last] <= cop;
+        }
+        return front;
+    }
+
+    /** Index of the first value above {@code x} in ascending {@code values}. */
+    private static int upperBound(double[] values, double x) {
+        int low = 0;
+        int high = values.length;
+        while (low < high) {
+            int mid = (low + high) >>> 1;
+            if (values[mid] <= x) {
+                low = mid + 1;
+            } else {
+                high = mid;
+            }
+        }
+        return low;
     }
 
     /** Float bits flipped so that signed integer order is numeric order (negatives reversed). */
     private static int sortableBits(float value) {
         int bits = Float.floatToIntBits(value);
         return bits < 0 ? bits ^ 0x7fffffff : bits;
-    }
-
-    /** Designs on the COP–cost Pareto front: sweep by rising cost, keep those that beat every cheaper COP. */
-    private static boolean[] paretoFront(int[] feasible, double[] arrayCost, double loadW, double[] powerW) {
-        boolean[] front = new boolean[arrayCost.length];
-        int priced = 0;
-        int[] withPrice = new int[feasible.length];
-        for (int d : feasible) {
-            if (Double.isFinite(arrayCost[d])) {
-                withPrice[priced++] = d;
-            }
-        }
-        long[] byCost = sortedByKey(Arrays.copyOf(withPrice, priced), arrayCost);
-        double bestCop = Double.NEGATIVE_INFINITY; // best COP among strictly cheaper designs
-        int j = 0;
-        while (j < byCost.length) {
-            // designs of equal cost form a group: only its best COP can be on the front
-            double cost = arrayCost[(int) byCost[j]];
-            int groupBest = -1;
-            double groupCop = Double.NEGATIVE_INFINITY;
-            for (; j < byCost.length && arrayCost[(int) byCost[j]] == cost; j++) {
-                int d = (int) byCost[j];
-                double cop = copOf(loadW, powerW[d]);
-                if (cop > groupCop) {
-                    groupCop = cop;
-                    groupBest = d;
-                }
-            }
-            if (groupCop > bestCop) {
-                front[groupBest] = true;
-                bestCop = groupCop;
-            }
-        }
-        return front;
     }
 }

@@ -116,11 +116,13 @@ class RankingEngineTest {
         assertThat(first.arrayCost()).isEqualTo(6);
         assertThat(first.paretoFront()).isTrue();
         assertThat(ranking.candidates()).extracting(Ranking.Candidate::arrayCost).isSorted();
-        // a dearer design is on the front only if it beats the COP of every cheaper one
-        double bestCop = Double.NEGATIVE_INFINITY;
+        // Pareto dominance (all designs are shown here): another design is no dearer and no less
+        // efficient, and better in one of the two
         for (var c : ranking.candidates()) {
-            assertThat(c.paretoFront()).isEqualTo(c.point().cop() > bestCop);
-            bestCop = Math.max(bestCop, c.point().cop());
+            boolean dominated = ranking.candidates().stream().anyMatch(o ->
+                    (o.arrayCost() < c.arrayCost() && o.point().cop() >= c.point().cop())
+                            || (o.arrayCost() <= c.arrayCost() && o.point().cop() > c.point().cop()));
+            assertThat(c.paretoFront()).as("%s", c).isEqualTo(!dominated);
         }
     }
 
@@ -159,6 +161,33 @@ class RankingEngineTest {
         var c = new RankingCase(s10(10), 10, Double.NaN, Double.NaN, 1, Objective.COP, 0, 1, 1, 50);
         var best = engine.rank(table(CandidateTable.PriceBook.NONE), c).candidates().get(0);
         assertThat(best.requiredSinkKPerW()).isCloseTo(10 / best.point().heatRejectedW(), withinPercentage(1e-9));
+    }
+
+    @Test
+    void paretoFrontIsJudgedAgainstEveryFeasibleDesignNotOnlyTheShownOnes() {
+        // limit 1 shows only the best COP; the full list tells which designs are dominated
+        CandidateTable.PriceBook prices = (index, quantity) -> index == 0 ? 20 : index == 1 ? 6 : 1;
+        var all = engine.rank(table(prices), rankingCase(s10(4), 4, Objective.COP));
+        var top = engine.rank(table(prices), new RankingCase(s10(4), Double.NaN, Double.NaN, Double.NaN, 4,
+                Objective.COP, 0, 1, 1, 1)).candidates().get(0);
+        var same = all.candidates().get(0);
+        assertThat(top.moduleId()).isEqualTo(same.moduleId());
+        assertThat(top.paretoFront()).isEqualTo(same.paretoFront());
+        // by the definition: on the front when no design costs less with at least its COP
+        boolean dominated = all.candidates().stream().anyMatch(c -> c.arrayCost() < same.arrayCost()
+                && c.point().cop() >= same.point().cop());
+        assertThat(same.paretoFront()).isEqualTo(!dominated);
+    }
+
+    @Test
+    void marginFilterDeepInTheListStillReturnsSortedCandidates() {
+        // a minimum margin that drops most designs makes the walk run past the first sorted `limit`
+        var all = engine.rank(table(CandidateTable.PriceBook.NONE), rankingCase(s10(3), 4, Objective.COP));
+        double high = all.candidates().stream().mapToDouble(c -> c.point().marginK()).max().orElseThrow() - 0.5;
+        var c = new RankingCase(s10(3), Double.NaN, Double.NaN, Double.NaN, 4, Objective.COP, high, 1, 1, 2);
+        var filtered = engine.rank(table(CandidateTable.PriceBook.NONE), c).candidates();
+        assertThat(filtered).isNotEmpty().allSatisfy(d -> assertThat(d.point().marginK()).isGreaterThanOrEqualTo(high));
+        assertThat(filtered).extracting(d -> d.point().cop()).isSortedAccordingTo((x, y) -> Double.compare(y, x));
     }
 
     @Test
