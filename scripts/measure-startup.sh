@@ -1,11 +1,12 @@
 #!/usr/bin/env bash
 # Measures the time from launching the packaged app to the first 200 on /actuator/health, and the
 # resident memory (RSS) just after. Usage: scripts/measure-startup.sh [runs] [extra java args...]
-# Needs ./mvnw -DskipTests package first. Uses a throw-away H2 file under a temp directory.
+# Needs ./mvnw -DskipTests package first (or JAR=path to another jar). Uses a throw-away H2 file under a
+# temp directory, so every run also loads the demo catalog, as a first start does.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 runs=${1:-3}; shift || true
-jar=$(ls target/chillwright-*.jar | grep -v plain | head -n 1)
+jar=${JAR:-$(ls target/chillwright-*.jar | grep -v plain | head -n 1)}
 port=18080
 for run in $(seq 1 "$runs"); do
     dir=$(mktemp -d)
