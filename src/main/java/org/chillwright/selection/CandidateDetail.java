@@ -1,6 +1,7 @@
 package org.chillwright.selection;
 
 import org.chillwright.catalog.ModuleSpec;
+import org.chillwright.physics.HeatingCheck;
 import org.chillwright.physics.Infeasible;
 import org.chillwright.physics.OperatingPoint;
 import org.chillwright.physics.Solved;
@@ -11,9 +12,10 @@ import org.chillwright.physics.Solved;
  *
  * @param sinkForMoreMarginKPerW heat-sink resistance that gives {@link #MORE_MARGIN_K} more margin, K/W;
  *                               NaN when no heat sink can (or in sizing mode, where the sink is an output)
+ * @param heating                the heating check on the coldest day, or null when none was asked for
  */
 public record CandidateDetail(ModuleSpec module, int seriesCount, int parallelCount, OperatingPoint point,
-                              CaseCurves curves, double sinkForMoreMarginKPerW) {
+                              CaseCurves curves, double sinkForMoreMarginKPerW, HeatingCheck.Result heating) {
 
     /** The extra margin the heat-sink hint aims for, K (the ask; a common design step). */
     public static final double MORE_MARGIN_K = 5;

@@ -1,6 +1,7 @@
 package org.chillwright.selection;
 
 import java.util.List;
+import org.chillwright.physics.HeatingCheck;
 
 /**
  * A ranking with the catalog facts a person needs beside each design.
@@ -19,9 +20,13 @@ public record RankingResult(List<Row> candidates, List<Refusal> infeasible, int 
         return elapsedNanos / 1e6;
     }
 
-    /** A ranked design and its module's identity. */
+    /**
+     * A ranked design and its module's identity.
+     *
+     * @param heating the heating check on the coldest day, or null when none was asked for
+     */
     public record Row(Ranking.Candidate design, String supplier, String partNumber, String lifecycle,
-                      String currency) {
+                      String currency, HeatingCheck.Result heating) {
     }
 
     /** A module with no design that works, and why. */

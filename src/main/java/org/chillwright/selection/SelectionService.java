@@ -10,6 +10,8 @@ import org.chillwright.catalog.ModuleSpec;
 import org.chillwright.physics.Check;
 import org.chillwright.physics.CoolingCase;
 import org.chillwright.physics.DriveLimits;
+import org.chillwright.physics.HeatingCheck;
+import org.chillwright.physics.ModuleParameters;
 import org.chillwright.physics.ModuleArray;
 import org.chillwright.physics.OperatingPointSolver;
 import org.chillwright.physics.Solved;
@@ -32,6 +34,7 @@ public class SelectionService {
 
     private final RankingEngine engine = new RankingEngine();
     private final OperatingPointSolver solver = new OperatingPointSolver();
+    private final HeatingCheck heatingCheck = new HeatingCheck();
     private volatile Prepared prepared;
 
     SelectionService(CatalogService catalog, ApprovedListService lists) {
@@ -53,7 +56,9 @@ public class SelectionService {
         for (var candidate : ranking.candidates()) {
             int i = snapshot.indexOf(candidate.moduleId());
             rowsOut.add(new RankingResult.Row(candidate, snapshot.supplier(i), snapshot.partNumber(i),
-                    snapshot.lifecycle(i).name(), snapshot.currency(i)));
+                    snapshot.lifecycle(i).name(), snapshot.currency(i), heating(spec, snapshot.parameters(i)
+                            .inArray(candidate.seriesCount(), candidate.parallelCount()),
+                            snapshot.imaxA(i) * candidate.parallelCount())));
         }
         var refusals = ranking.infeasible().stream().map(r -> {
             int i = snapshot.indexOf(r.moduleId());
@@ -85,7 +90,8 @@ public class SelectionService {
         var curves = CaseCurves.of(array.equivalent(), c, hotSideK, gridTopA);
         double sinkHint = point instanceof Solved solved && !rankingCase.sizesTheSink()
                 ? sinkForMargin(array, c, limits, solved.marginK() + CandidateDetail.MORE_MARGIN_K) : Double.NaN;
-        return new CandidateDetail(module, seriesCount, parallelCount, point, curves, sinkHint);
+        return new CandidateDetail(module, seriesCount, parallelCount, point, curves, sinkHint,
+                heating(spec, array.equivalent(), module.ratedImaxA() * parallelCount));
     }
 
     /**
@@ -151,6 +157,19 @@ public class SelectionService {
     private static CoolingCase withSink(CoolingCase c, double sinkResistanceKPerW) {
         return new CoolingCase(c.objectK(), c.ambientK(), c.heatLoadW(), sinkResistanceKPerW, c.coldInterfaceKPerW(),
                 c.hotInterfaceKPerW(), c.relativeHumidity());
+    }
+
+    /** The heating check of one design on the coldest day, or null when the case has none. */
+    private HeatingCheck.Result heating(CaseSpec spec, ModuleParameters equivalent, double ratedImaxA) {
+        if (spec.coldest() == null) {
+            return null;
+        }
+        var c = spec.rankingCase().coolingCase();
+        double limitA = Math.min(Double.isFinite(ratedImaxA) ? ratedImaxA : Double.POSITIVE_INFINITY,
+                Double.isFinite(spec.rankingCase().supplyMaxA()) ? spec.rankingCase().supplyMaxA()
+                        : Double.POSITIVE_INFINITY);
+        return heatingCheck.check(equivalent, c.objectK(), spec.coldest().ambientK(), spec.coldest().heatNeededW(),
+                c.coldInterfaceKPerW(), c.hotPathKPerW(), limitA);
     }
 
     private Prepared prepared() {

@@ -45,13 +45,19 @@ class RankingApiController {
             var design = row.design();
             return new RankingResponse.Candidate(design.rank(), design.moduleId(), row.partNumber(), row.supplier(),
                     row.lifecycle(), number(design.unitPrice()), number(design.arrayCost()), row.currency(),
-                    design.paretoFront(), number(design.requiredSinkKPerW()),
+                    design.paretoFront(), number(design.requiredSinkKPerW()), heating(row.heating()),
                     OperatingPointJson.of(design.point(), design.seriesCount(), design.parallelCount()));
         }).toList();
         var refused = result.infeasible().stream().map(r -> new RankingResponse.Refused(r.moduleId(), r.partNumber(),
                 r.supplier(), new OperatingPointResponse.ReasonJson(r.code(), r.message()))).toList();
         return new RankingResponse(candidates, refused, result.feasible(), result.evaluated(), result.elapsedMs(),
                 result.catalogRevision());
+    }
+
+    private static RankingResponse.Heating heating(org.chillwright.physics.HeatingCheck.Result h) {
+        return h == null ? null : new RankingResponse.Heating(h.needsHeating(), h.reachable(), h.withinLimits(),
+                number(h.currentA()), number(h.voltageV()), number(h.powerW()), number(h.copHeating()),
+                h.heatNeededW());
     }
 
     static CaseSpec spec(RankingRequest request) {
@@ -75,6 +81,17 @@ class RankingApiController {
                 request.limit() == null ? DEFAULT_LIMIT : request.limit());
         var lifecycles = request.lifecycles() == null || request.lifecycles().isEmpty()
                 ? EnumSet.complementOf(EnumSet.of(Lifecycle.OBSOLETE)) : request.lifecycles();
-        return new CaseSpec(rankingCase, request.supplier(), lifecycles, request.listId());
+        CaseSpec.ColdestDay coldest = null;
+        if (request.coldestAmbientC() != null) {
+            if (request.coldestAmbientC() >= request.objectC()) {
+                throw new InvalidRequestException("coldestAmbientC", "must be below objectC (" + request.objectC()
+                        + " °C) for a heating check, was " + request.coldestAmbientC() + " °C");
+            }
+            double loadW = request.heatLoadAtColdestW() == null ? request.heatLoadW() : request.heatLoadAtColdestW();
+            coldest = new CaseSpec.ColdestDay(Units.kelvinFromCelsius(request.coldestAmbientC()), -loadW);
+        } else if (request.heatLoadAtColdestW() != null) {
+            throw new InvalidRequestException("coldestAmbientC", "is required when heatLoadAtColdestW is given");
+        }
+        return new CaseSpec(rankingCase, request.supplier(), lifecycles, request.listId(), coldest);
     }
 }

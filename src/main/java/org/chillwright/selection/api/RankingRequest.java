@@ -15,12 +15,16 @@ import org.chillwright.selection.Objective;
 /**
  * {@code POST /api/v1/rankings}: rank the catalog (or an approved list) against one cooling case. Give
  * {@code sinkResistanceKPerW}, or {@code sinkRiseK} to have the heat sink each design needs sized for a
- * base that many kelvin above ambient.
+ * base that many kelvin above ambient. With {@code coldestAmbientC} each design also gets a heating check:
+ * the reversed current that holds the set-point on the coldest day, when the load then is
+ * {@code heatLoadAtColdestW} (default {@code heatLoadW}; negative when the object loses heat).
  */
 public record RankingRequest(
         @NotNull @DecimalMin(value = "-273.15", inclusive = false) @DecimalMax("400") Double objectC,
         @NotNull @DecimalMin(value = "-273.15", inclusive = false) @DecimalMax("400") Double ambientC,
         @NotNull @PositiveOrZero Double heatLoadW,
+        @DecimalMin(value = "-273.15", inclusive = false) @DecimalMax("400") Double coldestAmbientC,
+        Double heatLoadAtColdestW,
         @PositiveOrZero Double sinkResistanceKPerW,
         @Positive @DecimalMax("100") Double sinkRiseK,
         @PositiveOrZero Double coldInterfaceKPerW,

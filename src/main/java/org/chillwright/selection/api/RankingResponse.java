@@ -10,7 +10,16 @@ public record RankingResponse(List<Candidate> candidates, List<Refused> infeasib
     /** One design with its operating point fields alongside (currentA, cop, hotSideC, ...). */
     public record Candidate(int rank, long moduleId, String partNumber, String supplier, String lifecycle,
                             Double unitPrice, Double arrayCost, String currency, boolean paretoFront,
-                            Double requiredSinkKPerW, @JsonUnwrapped OperatingPointResponse point) {
+                            Double requiredSinkKPerW, Heating heating, @JsonUnwrapped OperatingPointResponse point) {
+    }
+
+    /**
+     * The heating check on the coldest day (current reversed).
+     *
+     * @param heatNeededW heat the object must get from the module, W (negative: it still runs warm)
+     */
+    public record Heating(boolean needsHeating, boolean reachable, boolean withinLimits, Double currentA,
+                          Double voltageV, Double powerW, Double copHeating, double heatNeededW) {
     }
 
     /** A module that has no design that works. */

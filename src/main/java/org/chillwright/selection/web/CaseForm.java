@@ -31,6 +31,7 @@ public record CaseForm(
         PowerUnit powerUnit,
         @NotNull(message = "enter the temperature the object must be held at") Double objectTemperature,
         @NotNull(message = "enter the hottest ambient the design must survive") Double ambientTemperature,
+        Double coldestAmbientTemperature,
         @NotNull(message = "enter the heat the object dissipates (0 if none)") @PositiveOrZero Double activeLoad,
         @PositiveOrZero @DecimalMax("1000") Double convectionWPerM2K,
         @PositiveOrZero @DecimalMax("10000") Double exposedAreaCm2,
@@ -56,7 +57,7 @@ public record CaseForm(
 
     /** A starting point a newcomer can rank at once: a small laser module held at 25 °C in a 45 °C box. */
     public static CaseForm example() {
-        return new CaseForm(TemperatureUnit.C, PowerUnit.W, 25.0, 45.0, 4.0, 8.0, 6.0, 0.5, 5.0, false, 0.4, 10.0,
+        return new CaseForm(TemperatureUnit.C, PowerUnit.W, 25.0, 45.0, null, 4.0, 8.0, 6.0, 0.5, 5.0, false, 0.4, 10.0,
                 0.1, 0.05, 12.0, 5.0, 50.0, 4, Objective.COP, null, EnumSet.complementOf(EnumSet.of(Lifecycle.OBSOLETE)),
                 null, 0.0, 100.0, 100, 50);
     }
@@ -88,6 +89,13 @@ public record CaseForm(
         return ambientTemperature == null || temperatureUnit().toCelsius(ambientTemperature) > -273.15;
     }
 
+    @AssertTrue(message = "the coldest ambient must be above absolute zero and below the set-point")
+    public boolean isColdestAmbientTemperatureSensible() {
+        return coldestAmbientTemperature == null || objectTemperature == null
+                || (temperatureUnit().toCelsius(coldestAmbientTemperature) > -273.15
+                && coldestAmbientTemperature < objectTemperature);
+    }
+
     public double objectC() {
         return temperatureUnit().toCelsius(objectTemperature);
     }
@@ -112,6 +120,21 @@ public record CaseForm(
         return Math.max(0, activeLoadW() + parasiticW());
     }
 
+    /**
+     * The heating check on the coldest day: the object keeps dissipating its active load and loses heat
+     * to the cold ambient through the same leaks, so the module must make up the difference.
+     */
+    public CaseSpec.ColdestDay coldestDay() {
+        if (coldestAmbientTemperature == null) {
+            return null;
+        }
+        double coldK = Units.kelvinFromCelsius(temperatureUnit().toCelsius(coldestAmbientTemperature));
+        var leaks = new ParasiticLoad(orZero(convectionWPerM2K), orZero(exposedAreaCm2) * 1e-4, orZero(emissivity),
+                orZero(leadConductanceMWPerK) * 1e-3);
+        double netInW = activeLoadW() + leaks.totalW(Units.kelvinFromCelsius(objectC()), coldK);
+        return new CaseSpec.ColdestDay(coldK, -netInW);
+    }
+
     public CaseSpec toSpec() {
         var coolingCase = new CoolingCase(Units.kelvinFromCelsius(objectC()), Units.kelvinFromCelsius(ambientC()),
                 heatLoadW(), sizesSink() ? 0 : sinkResistanceKPerW, orZero(coldInterfaceKPerW),
@@ -122,7 +145,7 @@ public record CaseForm(
                 maxModules == null ? 4 : maxModules, objective == null ? Objective.COP : objective,
                 orZero(minMarginK), maxImaxPct == null ? 1 : Units.fractionFromPercent(maxImaxPct),
                 costQuantity == null ? 1 : costQuantity, limit == null ? 50 : limit);
-        return new CaseSpec(rankingCase, supplier, lifecycles, listId);
+        return new CaseSpec(rankingCase, supplier, lifecycles, listId, coldestDay());
     }
 
     /** The form as a query string, for links to the ranking, a candidate and a comparison. */
@@ -132,6 +155,7 @@ public record CaseForm(
         add(uri, "powerUnit", powerUnit());
         add(uri, "objectTemperature", objectTemperature);
         add(uri, "ambientTemperature", ambientTemperature);
+        add(uri, "coldestAmbientTemperature", coldestAmbientTemperature);
         add(uri, "activeLoad", activeLoad);
         add(uri, "convectionWPerM2K", convectionWPerM2K);
         add(uri, "exposedAreaCm2", exposedAreaCm2);

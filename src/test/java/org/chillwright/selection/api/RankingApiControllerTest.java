@@ -116,6 +116,16 @@ class RankingApiControllerTest {
         rank("{" + S10 + ",\"listId\":987654}").andExpect(status().isNotFound());
     }
 
+    @Test
+    void coldestDayGivesEachDesignAHeatingCheck() throws Exception {
+        rank("{" + S10 + ",\"maxModules\":1,\"coldestAmbientC\":-20,\"heatLoadAtColdestW\":1}")
+                .andExpect(status().isOk())
+                .andExpect(jsonPath("$.candidates[0].heating.needsHeating").value(true))
+                .andExpect(jsonPath("$.candidates[0].heating.currentA").isNumber())
+                .andExpect(jsonPath("$.candidates[0].heating.heatNeededW").value(closeTo(-1.0, 1e-12), Double.class));
+        rank("{" + S10 + "}").andExpect(jsonPath("$.candidates[0].heating").doesNotExist());
+    }
+
     @ParameterizedTest(name = "{0}")
     @CsvSource(delimiter = '|', value = {
         "no heat sink at all      | {\"objectC\":5,\"ambientC\":25,\"heatLoadW\":10} | sinkResistanceKPerW",
@@ -124,6 +134,8 @@ class RankingApiControllerTest {
         "unknown objective        | {" + S10 + ",\"objective\":\"FASTEST\"} | objective",
         "Imax fraction above one  | {" + S10 + ",\"maxFractionOfImax\":1.5} | maxFractionOfImax",
         "missing load             | {\"objectC\":5,\"ambientC\":25,\"sinkResistanceKPerW\":0.3} | heatLoadW",
+        "coldest day too warm     | {" + S10 + ",\"coldestAmbientC\":10} | coldestAmbientC",
+        "cold load without a day  | {" + S10 + ",\"heatLoadAtColdestW\":2} | coldestAmbientC",
     })
     void badRankingRequestIsA400NamingTheField(String what, String json, String field) throws Exception {
         rank(json).andExpect(status().isBadRequest())

@@ -103,6 +103,28 @@ class SelectionPagesTest {
     }
 
     @Test
+    void coldestDayAddsAHeatingCheckToEveryDesign() throws Exception {
+        // 5 °C set-point, -20 °C coldest day: conduction through the idle module (K = 0.25 W/K per TM-A)
+        // drains far more than the 10 W the object dissipates, so every design must heat
+        mvc.perform(s10("/cases/rank", "coldestAmbientTemperature", "-20", "activeLoad", "1"))
+                .andExpect(status().isOk())
+                .andExpect(content().string(allOf(containsString("Coldest day"), containsString("heats at"))));
+        long id = catalog.search(org.chillwright.catalog.ModuleQuery.text("TMA-1")).items().get(0).id();
+        mvc.perform(s10("/cases/candidate", "coldestAmbientTemperature", "-20", "activeLoad", "1")
+                        .param("moduleId", String.valueOf(id)))
+                .andExpect(status().isOk())
+                .andExpect(content().string(allOf(containsString("with the current reversed"),
+                        containsString("H-bridge"))));
+    }
+
+    @Test
+    void coldestAmbientAboveTheSetPointIsRefusedBesideTheField() throws Exception {
+        mvc.perform(s10("/cases/rank", "coldestAmbientTemperature", "30"))
+                .andExpect(status().isOk())
+                .andExpect(content().string(containsString("below the set-point")));
+    }
+
+    @Test
     void unknownModuleOnTheCandidatePageIsA404() throws Exception {
         mvc.perform(s10("/cases/candidate").param("moduleId", "999999")).andExpect(status().isNotFound());
     }
