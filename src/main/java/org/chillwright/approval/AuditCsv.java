@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.function.Function;
 import java.util.stream.Collectors;
+import org.chillwright.web.SpreadsheetText;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 
@@ -29,14 +30,7 @@ final class AuditCsv {
         }
     }
 
-    /**
-     * Text typed by people is quoted by the printer; a leading =, +, - or @ is also prefixed with an
-     * apostrophe so that a spreadsheet opening the file shows it instead of running it as a formula.
-     */
-    static String cell(String text) {
-        if (text != null && !text.isEmpty() && "=+-@\t\r".indexOf(text.charAt(0)) >= 0) {
-            return "'" + text;
-        }
-        return text;
+    private static String cell(String text) {
+        return SpreadsheetText.safe(text);
     }
 }

@@ -1,5 +1,7 @@
 package org.chillwright.selection;
 
+import static org.chillwright.web.SpreadsheetText.safe;
+
 import java.io.IOException;
 import java.io.StringWriter;
 import java.io.UncheckedIOException;
@@ -29,7 +31,8 @@ public final class RankingCsv {
             for (var row : result.candidates()) {
                 var d = row.design();
                 var p = d.point();
-                csv.printRecord(d.rank(), true, d.moduleId(), row.supplier(), row.partNumber(), row.lifecycle(),
+                csv.printRecord(d.rank(), true, d.moduleId(), safe(row.supplier()), safe(row.partNumber()),
+                        row.lifecycle(),
                         d.seriesCount(), d.parallelCount(), num(p.currentA()), num(p.voltageV()), num(p.powerW()),
                         num(p.cop()), num(Units.celsiusFromKelvin(p.objectK())),
                         num(Units.celsiusFromKelvin(p.coldSideK())), num(Units.celsiusFromKelvin(p.hotSideK())),
@@ -39,7 +42,8 @@ public final class RankingCsv {
                         p.warnings().stream().map(w -> w.code().name()).collect(Collectors.joining(" ")), "");
             }
             for (var refusal : result.infeasible()) {
-                csv.printRecord("", false, refusal.moduleId(), refusal.supplier(), refusal.partNumber(), "", "", "", "",
+                csv.printRecord("", false, refusal.moduleId(), safe(refusal.supplier()), safe(refusal.partNumber()), "",
+                        "", "", "",
                         "", "", "", "", "", "", "", "", "", "", "", "", "", "", "", "",
                         refusal.code() + ": " + refusal.message());
             }

@@ -162,6 +162,21 @@ class SelectionPagesTest {
     }
 
     @Test
+    void partNumbersThatLookLikeFormulasAreDefusedInTheCsv() throws Exception {
+        // a tenth of TM-A cannot carry the case, so it only appears among the refusals
+        var ratings = new org.chillwright.catalog.RatedInputs(TestCatalog.TM_A_IMAX_A * 0.1, TestCatalog.TM_A_VMAX_V,
+                null, TestCatalog.TM_A_DTMAX_K, TestCatalog.TM_A_HOT_SIDE_C,
+                org.chillwright.physics.RatingsMethod.IMAX_VMAX_DTMAX, null);
+        if (catalog.search(org.chillwright.catalog.ModuleQuery.text("=2+3")).total() == 0) {
+            catalog.create(new org.chillwright.catalog.ModuleDefinition("Formula Test Parts", "=2+3", null, ratings,
+                    null, null, null, null, null, null, java.util.List.of(), null, null,
+                    org.chillwright.catalog.Lifecycle.ACTIVE, null, null, null, null), "test");
+        }
+        String csv = mvc.perform(s10("/cases/rank.csv")).andReturn().getResponse().getContentAsString();
+        assertThat(csv).contains("'=2+3").doesNotContain(",=2+3");
+    }
+
+    @Test
     void pdfReportCarriesTheCaseCandidatesSourcesAndCautions() throws Exception {
         byte[] pdf = mvc.perform(s10("/cases/report.pdf")).andExpect(status().isOk())
                 .andReturn().getResponse().getContentAsByteArray();
