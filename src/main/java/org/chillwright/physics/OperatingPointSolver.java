@@ -709,9 +709,13 @@ public final class OperatingPointSolver {
                     Units.celsiusFromKelvin(limits.maxHotSideK())));
         }
         if (!Double.isNaN(dewPointK) && coldK < dewPointK + DEW_POINT_MARGIN_K) {
-            warnings = add(warnings, Warning.Code.CONDENSATION_RISK, format(
-                    "the cold face at %.1f °C is less than %.0f K above the ambient dew point %.1f °C: seal or purge it",
-                    Units.celsiusFromKelvin(coldK), DEW_POINT_MARGIN_K, Units.celsiusFromKelvin(dewPointK)));
+            warnings = add(warnings, Warning.Code.CONDENSATION_RISK, coldK < dewPointK
+                    ? format("the cold face at %.1f °C is below the ambient dew point %.1f °C: water will condense on "
+                            + "it; seal, insulate or purge the cold side, or raise the set-point",
+                            Units.celsiusFromKelvin(coldK), Units.celsiusFromKelvin(dewPointK))
+                    : format("the cold face at %.1f °C is less than %.0f K above the ambient dew point %.1f °C: "
+                            + "seal or purge the cold side", Units.celsiusFromKelvin(coldK), DEW_POINT_MARGIN_K,
+                            Units.celsiusFromKelvin(dewPointK)));
         }
         return warnings == null ? List.of() : warnings;
     }

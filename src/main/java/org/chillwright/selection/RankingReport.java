@@ -64,6 +64,9 @@ public final class RankingReport {
         var document = new Document(PageSize.A4.rotate(), 36, 36, 36, 36);
         try {
             var writer = PdfWriter.getInstance(document, bytes);
+            // keep each curve with its heading: by default an image that does not fit waits for the next
+            // page while the text after it runs on
+            writer.setStrictImageSequence(true);
             document.addTitle("Chillwright ranking report");
             document.addCreator("Chillwright");
             document.open();
@@ -92,6 +95,14 @@ public final class RankingReport {
                 document.add(heading("Curves: " + detail.module().partNumber() + " (" + detail.module().supplier()
                         + "), " + detail.seriesCount() + " series x " + detail.parallelCount() + " parallel"));
                 document.add(com.lowagie.text.Image.getInstance(curvePlot(writer.getDirectContent(), detail)));
+                var heating = detail.heating();
+                if (heating != null) {
+                    document.add(new Paragraph(!heating.needsHeating() ? "Coldest day: no heating current needed."
+                            : !heating.reachable() ? "Coldest day: cannot hold the set-point."
+                            : "Coldest day: heats with the current reversed at " + fmt(heating.currentA(), 2) + " A, "
+                                    + fmt(heating.voltageV(), 2) + " V, " + fmt(heating.powerW(), 2) + " W"
+                                    + (heating.withinLimits() ? "." : ", above the current limit."), BODY));
+                }
                 var solved = detail.solved();
                 if (solved != null && !solved.warnings().isEmpty()) {
                     for (var w : solved.warnings()) {
@@ -203,6 +214,9 @@ public final class RankingReport {
         t.setFontAndSize(font, 7);
         t.showTextAligned(Element.ALIGN_CENTER, "current (A), 0 to " + fmt(maxX, 2), left + plotW / 2, 6, 0);
         t.showTextAligned(Element.ALIGN_CENTER, "heat pumped (W), 0 to " + fmt(maxY, 1), 10, bottom + plotH / 2, 90);
+        t.showTextAligned(Element.ALIGN_LEFT, "blue: with this heat sink; grey: at fixed dT of "
+                + java.util.Arrays.toString(curves.fixedDeltaTK()).replace(".0", "") + " K, top to bottom; dot: "
+                + "operating point", left + 4, height - 8, 0);
         t.endText();
         // fixed-ΔT family in grey, then the heat-sink curve in blue
         for (double[] family : curves.coolingAtDeltaW()) {

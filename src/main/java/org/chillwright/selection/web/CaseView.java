@@ -42,6 +42,9 @@ public record CaseView(CaseForm form) {
         var lines = new java.util.LinkedHashMap<String, String>();
         lines.put("Object set-point", temperature(c.coolingCase().objectK()));
         lines.put("Hottest ambient", temperature(c.coolingCase().ambientK()));
+        if (form.coldestDay() != null) {
+            lines.put("Coldest ambient (heating check)", temperature(form.coldestDay().ambientK()));
+        }
         lines.put("Heat load", power(form.heatLoadW()) + " (" + power(form.activeLoadW()) + " active, "
                 + power(form.parasiticW()) + " parasitic)");
         lines.put("Heat sink", form.sizesSink() ? "sized for a " + number(c.sinkRiseK(), 1) + " K rise"
