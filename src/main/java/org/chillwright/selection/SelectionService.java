@@ -118,7 +118,7 @@ public class SelectionService {
                     .map(r -> new Comparison.SecondSource(r.design().moduleId(), r.supplier(), r.partNumber(),
                             r.design().seriesCount(), r.design().parallelCount(), r.design().point().cop()))
                     .orElse(null);
-            return new Comparison.Row(m.id(), m.supplier(), m.partNumber(), m.lifecycle().name(), unitPrice, arrayCost,
+            return new Comparison.Row(m.id(), m.supplier(), m.partNumber(), m.lifecycle().label(), unitPrice, arrayCost,
                     definition.currency(), definition.leadTimeDays(), definition.minOrderQuantity(), second);
         }).toList();
         return new Comparison(quantity, rows);
