@@ -149,6 +149,24 @@ public final class CatalogSnapshot {
     }
 
     /** Unit price when buying {@code quantity} pieces (largest break at or below it), or NaN. */
+    /**
+     * What one needed piece really costs when {@code needed} pieces must be bought: the cheapest of buying
+     * exactly that many at their break, or rounding up to a larger break (which is often cheaper, and is
+     * the only way to buy fewer pieces than the first break). Total cost over {@code needed}; NaN without
+     * prices.
+     */
+    public double effectiveUnitPriceAt(int i, int needed) {
+        int[] quantities = breakQuantities[i];
+        double best = needed * unitPriceAt(i, needed); // NaN when below the first break
+        for (int b = 0; b < quantities.length; b++) {
+            if (quantities[b] > needed) {
+                double roundedUp = quantities[b] * breakUnitPrices[i][b];
+                best = Double.isNaN(best) ? roundedUp : Math.min(best, roundedUp);
+            }
+        }
+        return best / needed;
+    }
+
     public double unitPriceAt(int i, int quantity) {
         double price = Double.NaN;
         int[] quantities = breakQuantities[i];

@@ -54,6 +54,22 @@ public record ModuleDefinition(String supplier, String partNumber, String descri
      * Unit price when buying {@code quantity} pieces: the price of the largest break at or below it.
      * Empty when the smallest break is above {@code quantity} or no price is known.
      */
+    /**
+     * What one needed piece really costs when {@code needed} pieces must be bought: the cheapest of buying
+     * exactly that many at their break or rounding up to a larger break. Empty without prices.
+     */
+    public Optional<BigDecimal> effectiveUnitPriceAt(int needed) {
+        BigDecimal best = unitPriceAt(needed).map(p -> p.multiply(BigDecimal.valueOf(needed))).orElse(null);
+        for (PriceBreak b : prices) {
+            if (b.quantity() != null && b.quantity() > needed) {
+                BigDecimal roundedUp = b.unitPrice().multiply(BigDecimal.valueOf(b.quantity()));
+                best = best == null || roundedUp.compareTo(best) < 0 ? roundedUp : best;
+            }
+        }
+        return Optional.ofNullable(best)
+                .map(total -> total.divide(BigDecimal.valueOf(needed), 4, java.math.RoundingMode.HALF_UP));
+    }
+
     public Optional<BigDecimal> unitPriceAt(int quantity) {
         BigDecimal price = null;
         for (PriceBreak b : prices) {

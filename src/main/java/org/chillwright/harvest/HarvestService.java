@@ -47,7 +47,8 @@ public class HarvestService {
         var module = catalog.get(moduleId);
         var harvestCase = spec.harvestCase();
         int pieces = seriesCount * parallelCount * harvestCase.costQuantity();
-        double unitPrice = module.unitPriceAt(pieces).map(java.math.BigDecimal::doubleValue).orElse(Double.NaN);
+        double unitPrice = module.definition().effectiveUnitPriceAt(pieces).map(java.math.BigDecimal::doubleValue)
+                .orElse(Double.NaN);
         var design = engine.design(moduleId, module.parameters(), seriesCount, parallelCount,
                 harvestCase.generatorCase(), module.maxHotSideK().orElse(Double.NaN), unitPrice);
         var curves = HarvestCurves.of(module.parameters().inArray(seriesCount, parallelCount),
@@ -69,6 +70,6 @@ public class HarvestService {
                 Arrays.stream(rows).mapToDouble(snapshot::resistanceOhm).toArray(),
                 Arrays.stream(rows).mapToDouble(snapshot::conductanceWPerK).toArray(),
                 Arrays.stream(rows).mapToDouble(snapshot::maxHotSideK).toArray(),
-                (index, quantity) -> snapshot.unitPriceAt(rows[index], quantity));
+                (index, quantity) -> snapshot.effectiveUnitPriceAt(rows[index], quantity));
     }
 }

@@ -110,7 +110,7 @@ public class SelectionService {
             var m = d.module();
             var definition = m.definition();
             int pieces = d.moduleCount() * quantity;
-            var unitPrice = m.unitPriceAt(pieces).orElse(null);
+            var unitPrice = m.definition().effectiveUnitPriceAt(pieces).orElse(null);
             var arrayCost = unitPrice == null ? null : unitPrice.multiply(java.math.BigDecimal.valueOf(d.moduleCount()));
             var second = ranking.candidates().stream()
                     .filter(r -> !r.supplier().equalsIgnoreCase(m.supplier()))
@@ -201,7 +201,7 @@ public class SelectionService {
             dtmax[i] = snapshot.dtmaxK(i);
             maxHot[i] = snapshot.maxHotSideK(i);
         }
-        return new CandidateTable(ids, s, r, k, imax, dtmax, maxHot, snapshot::unitPriceAt);
+        return new CandidateTable(ids, s, r, k, imax, dtmax, maxHot, snapshot::effectiveUnitPriceAt);
     }
 
     private int[] selectedRows(CatalogSnapshot snapshot, CaseSpec spec) {
@@ -229,7 +229,7 @@ public class SelectionService {
         return new CandidateTable(pick(full.moduleIds(), rows), pick(full.seebeckVPerK(), rows),
                 pick(full.resistanceOhm(), rows), pick(full.conductanceWPerK(), rows), pick(full.ratedImaxA(), rows),
                 pick(full.ratedDtmaxK(), rows), pick(full.maxHotSideK(), rows),
-                (index, quantity) -> snapshot.unitPriceAt(rows[index], quantity));
+                (index, quantity) -> snapshot.effectiveUnitPriceAt(rows[index], quantity));
     }
 
     private static double[] pick(double[] column, int[] rows) {

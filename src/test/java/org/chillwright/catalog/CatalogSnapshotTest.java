@@ -30,6 +30,21 @@ class CatalogSnapshotTest {
     }
 
     @Test
+    void effectivePriceRoundsUpToALargerBreakWhenThatIsCheaper() {
+        // breaks 1:12.40 and 100:9.85 (CatalogFixtures): 90 pieces cost 1116.00 bought exactly, but 100 pieces
+        // cost 985.00, so one needed piece really costs 985.00 / 90 (hand arithmetic)
+        var module = catalog.create(CatalogFixtures.rated("Snapshot Co " + UUID.randomUUID(), "S-3"), "tester");
+        var snapshot = catalog.snapshot();
+        int i = snapshot.indexOf(module.id());
+        assertThat(snapshot.effectiveUnitPriceAt(i, 90)).isCloseTo(985.0 / 90, org.assertj.core.api.Assertions.within(1e-9));
+        assertThat(snapshot.effectiveUnitPriceAt(i, 50)).isEqualTo(12.4);
+        assertThat(snapshot.effectiveUnitPriceAt(i, 200)).isEqualTo(9.85);
+        assertThat(module.definition().effectiveUnitPriceAt(90))
+                .hasValueSatisfying(p -> assertThat(p.doubleValue()).isCloseTo(985.0 / 90,
+                        org.assertj.core.api.Assertions.within(1e-4)));
+    }
+
+    @Test
     void archivedModuleLeavesTheSnapshot() {
         var module = catalog.create(CatalogFixtures.rated("Snapshot Co " + UUID.randomUUID(), "S-2"), "tester");
         catalog.archive(module.id(), "tester");
