@@ -28,6 +28,7 @@ public final class CatalogSnapshot {
     private final String[] currencies;
     private final int[][] breakQuantities;
     private final double[][] breakUnitPrices;
+    private final int[] minOrderQuantities;
 
     CatalogSnapshot(long revision, List<Row> rows) {
         this.revision = revision;
@@ -47,6 +48,7 @@ public final class CatalogSnapshot {
         currencies = new String[n];
         breakQuantities = new int[n][];
         breakUnitPrices = new double[n][];
+        minOrderQuantities = new int[n];
         for (int i = 0; i < n; i++) {
             Row row = rows.get(i);
             ids[i] = row.id();
@@ -64,6 +66,7 @@ public final class CatalogSnapshot {
             currencies[i] = row.currency();
             breakQuantities[i] = row.breakQuantities().clone();
             breakUnitPrices[i] = row.breakUnitPrices().clone();
+            minOrderQuantities[i] = row.minOrderQuantity();
         }
     }
 
@@ -71,7 +74,7 @@ public final class CatalogSnapshot {
     record Row(long id, String supplier, String partNumber, Lifecycle lifecycle, double seebeckVPerK,
                double resistanceOhm, double conductanceWPerK, double imaxA, double vmaxV, double qmaxW,
                double dtmaxK, double maxHotSideK, String currency, int[] breakQuantities,
-               double[] breakUnitPrices) {
+               double[] breakUnitPrices, int minOrderQuantity) {
     }
 
     static CatalogSnapshot empty() {
@@ -150,16 +153,17 @@ public final class CatalogSnapshot {
 
     /** Unit price when buying {@code quantity} pieces (largest break at or below it), or NaN. */
     /**
-     * What one needed piece really costs when {@code needed} pieces must be bought: the cheapest of buying
-     * exactly that many at their break, or rounding up to a larger break (which is often cheaper, and is
-     * the only way to buy fewer pieces than the first break). Total cost over {@code needed}; NaN without
-     * prices.
+     * What one needed piece really costs when {@code needed} pieces must be bought: at least the minimum
+     * order is bought, then the cheapest of buying that many at their break or rounding up to a larger
+     * break (which is often cheaper, and is the only way to buy fewer pieces than the first break). Total
+     * cost over {@code needed}; NaN without prices.
      */
     public double effectiveUnitPriceAt(int i, int needed) {
         int[] quantities = breakQuantities[i];
-        double best = needed * unitPriceAt(i, needed); // NaN when below the first break
+        int bought = Math.max(needed, minOrderQuantities[i]);
+        double best = bought * unitPriceAt(i, bought); // NaN when below the first break
         for (int b = 0; b < quantities.length; b++) {
-            if (quantities[b] > needed) {
+            if (quantities[b] > bought) {
                 double roundedUp = quantities[b] * breakUnitPrices[i][b];
                 best = Double.isNaN(best) ? roundedUp : Math.min(best, roundedUp);
             }

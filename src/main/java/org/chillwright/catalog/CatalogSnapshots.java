@@ -68,7 +68,7 @@ class CatalogSnapshots {
                 });
         List<CatalogSnapshot.Row> rows = jdbc.query("SELECT id, supplier, part_number, lifecycle, seebeck_v_per_k, "
                         + "resistance_ohm, conductance_w_per_k, list_imax_a, list_vmax_v, list_qmax_w, list_dtmax_k, "
-                        + "max_operating_c, currency FROM catalog_module WHERE archived = FALSE ORDER BY id",
+                        + "max_operating_c, currency, min_order_quantity FROM catalog_module WHERE archived = FALSE ORDER BY id",
                 (rs, n) -> {
                     long id = rs.getLong(1);
                     double maxOperatingC = rs.getDouble(12);
@@ -78,7 +78,7 @@ class CatalogSnapshots {
                             Lifecycle.valueOf(rs.getString(4)), rs.getDouble(5), rs.getDouble(6), rs.getDouble(7),
                             rs.getDouble(8), rs.getDouble(9), rs.getDouble(10), rs.getDouble(11), maxHotSideK,
                             rs.getString(13), moduleBreaks.stream().mapToInt(b -> (int) b[0]).toArray(),
-                            moduleBreaks.stream().mapToDouble(b -> b[1]).toArray());
+                            moduleBreaks.stream().mapToDouble(b -> b[1]).toArray(), rs.getInt(14));
                 });
         current = new CatalogSnapshot(revision, rows);
         return current;

@@ -55,13 +55,15 @@ public record ModuleDefinition(String supplier, String partNumber, String descri
      * Empty when the smallest break is above {@code quantity} or no price is known.
      */
     /**
-     * What one needed piece really costs when {@code needed} pieces must be bought: the cheapest of buying
-     * exactly that many at their break or rounding up to a larger break. Empty without prices.
+     * What one needed piece really costs when {@code needed} pieces must be bought: at least the minimum
+     * order, then the cheapest of buying that many at their break or rounding up to a larger break. Empty
+     * without prices.
      */
     public Optional<BigDecimal> effectiveUnitPriceAt(int needed) {
-        BigDecimal best = unitPriceAt(needed).map(p -> p.multiply(BigDecimal.valueOf(needed))).orElse(null);
+        int bought = minOrderQuantity == null ? needed : Math.max(needed, minOrderQuantity);
+        BigDecimal best = unitPriceAt(bought).map(p -> p.multiply(BigDecimal.valueOf(bought))).orElse(null);
         for (PriceBreak b : prices) {
-            if (b.quantity() != null && b.quantity() > needed) {
+            if (b.quantity() != null && b.quantity() > bought) {
                 BigDecimal roundedUp = b.unitPrice().multiply(BigDecimal.valueOf(b.quantity()));
                 best = best == null || roundedUp.compareTo(best) < 0 ? roundedUp : best;
             }

@@ -45,6 +45,24 @@ class CatalogSnapshotTest {
     }
 
     @Test
+    void effectivePriceBuysAtLeastTheMinimumOrder() {
+        // minimum order 25 with breaks 1:12.40 and 100:9.85: 3 needed pieces mean buying 25 at 12.40 = 310.00,
+        // cheaper than 100 at 9.85 = 985.00, so one needed piece costs 310.00 / 3 (hand arithmetic)
+        var fixture = CatalogFixtures.rated("Snapshot Co " + UUID.randomUUID(), "S-4");
+        var definition = new ModuleDefinition(fixture.supplier(), fixture.partNumber(), fixture.description(),
+                fixture.ratings(), null, fixture.widthMm(), fixture.lengthMm(), fixture.heightMm(),
+                fixture.maxOperatingC(), fixture.currency(), fixture.prices(), fixture.leadTimeDays(), 25,
+                fixture.lifecycle(), fixture.rohs(), fixture.reach(), fixture.datasheetRef(), fixture.notes());
+        var module = catalog.create(definition, "tester");
+        var snapshot = catalog.snapshot();
+        assertThat(snapshot.effectiveUnitPriceAt(snapshot.indexOf(module.id()), 3))
+                .isCloseTo(310.0 / 3, org.assertj.core.api.Assertions.within(1e-9));
+        assertThat(module.definition().effectiveUnitPriceAt(3))
+                .hasValueSatisfying(p -> assertThat(p.doubleValue()).isCloseTo(310.0 / 3,
+                        org.assertj.core.api.Assertions.within(1e-4)));
+    }
+
+    @Test
     void archivedModuleLeavesTheSnapshot() {
         var module = catalog.create(CatalogFixtures.rated("Snapshot Co " + UUID.randomUUID(), "S-2"), "tester");
         catalog.archive(module.id(), "tester");

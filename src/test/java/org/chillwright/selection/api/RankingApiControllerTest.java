@@ -57,7 +57,8 @@ class RankingApiControllerTest {
                 .andExpect(jsonPath("$.candidates[0].rank").value(1))
                 .andExpect(jsonPath("$.candidates[0].currentA").value(closeTo(1.961596365, 1e-5), Double.class))
                 .andExpect(jsonPath("$.candidates[0].cop").value(closeTo(0.8716659285, 1e-5), Double.class))
-                .andExpect(jsonPath("$.candidates[0].unitPrice").value(closeTo(18.0, 1e-9), Double.class))
+                // one piece needed, but the minimum order is 10 at 18.00: each needed piece costs 180.00
+                .andExpect(jsonPath("$.candidates[0].unitPrice").value(closeTo(180.0, 1e-9), Double.class))
                 .andExpect(jsonPath("$.evaluated").value(1))
                 .andExpect(jsonPath("$.elapsedMs").isNumber());
     }
