@@ -55,6 +55,9 @@ public record CaseForm(
         @Min(1) @Max(10_000_000) Integer costQuantity,
         @Min(1) @Max(500) Integer limit) {
 
+    private static final double SQUARE_METRES_PER_CM2 = 1e-4;
+    private static final double WATTS_PER_MILLIWATT = 1e-3;
+
     /** A starting point a newcomer can rank at once: a small laser module held at 25 °C in a 45 °C box. */
     public static CaseForm example() {
         return new CaseForm(TemperatureUnit.C, PowerUnit.W, 25.0, 45.0, null, 4.0, 8.0, 6.0, 0.5, 5.0, false, 0.4, 10.0,
@@ -104,11 +107,15 @@ public record CaseForm(
         return temperatureUnit().toCelsius(ambientTemperature);
     }
 
+    /** The leaks the helper describes, in SI (areas typed in cm², lead conductance in mW/K). */
+    private ParasiticLoad leaks() {
+        return new ParasiticLoad(orZero(convectionWPerM2K), orZero(exposedAreaCm2) * SQUARE_METRES_PER_CM2,
+                orZero(emissivity), orZero(leadConductanceMWPerK) * WATTS_PER_MILLIWATT);
+    }
+
     /** Parasitic heat leaking into the object from the ambient, W (0 when no helper values are given). */
     public double parasiticW() {
-        var leaks = new ParasiticLoad(orZero(convectionWPerM2K), orZero(exposedAreaCm2) * 1e-4, orZero(emissivity),
-                orZero(leadConductanceMWPerK) * 1e-3);
-        return leaks.totalW(Units.kelvinFromCelsius(objectC()), Units.kelvinFromCelsius(ambientC()));
+        return leaks().totalW(Units.kelvinFromCelsius(objectC()), Units.kelvinFromCelsius(ambientC()));
     }
 
     public double activeLoadW() {
@@ -129,9 +136,7 @@ public record CaseForm(
             return null;
         }
         double coldK = Units.kelvinFromCelsius(temperatureUnit().toCelsius(coldestAmbientTemperature));
-        var leaks = new ParasiticLoad(orZero(convectionWPerM2K), orZero(exposedAreaCm2) * 1e-4, orZero(emissivity),
-                orZero(leadConductanceMWPerK) * 1e-3);
-        double netInW = activeLoadW() + leaks.totalW(Units.kelvinFromCelsius(objectC()), coldK);
+        double netInW = activeLoadW() + leaks().totalW(Units.kelvinFromCelsius(objectC()), coldK);
         return new CaseSpec.ColdestDay(coldK, -netInW);
     }
 
