@@ -18,21 +18,18 @@ import org.openqa.selenium.support.ui.WebDriverWait;
  */
 public final class Browser implements AutoCloseable {
 
-    private static final String CHROMIUM = "/usr/bin/chromium";
-    private static final String CHROMEDRIVER = "/usr/bin/chromedriver";
-
     private final ChromeDriver driver;
     private final Path profile;
 
     public Browser() throws IOException {
         profile = Files.createTempDirectory("chillwright-chromium");
         var options = new ChromeOptions();
-        options.setBinary(CHROMIUM);
+        options.setBinary(BrowserInstallation.DEBIAN.chromium().toFile());
         options.addArguments("--headless=new", "--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage",
                 "--disable-background-networking", "--disable-component-update", "--disable-sync",
                 "--disable-quic", "--no-first-run", "--window-size=1280,1000", "--user-data-dir=" + profile);
-        var service = new ChromeDriverService.Builder().usingDriverExecutable(Path.of(CHROMEDRIVER).toFile())
-                .usingAnyFreePort().build();
+        var service = new ChromeDriverService.Builder()
+                .usingDriverExecutable(BrowserInstallation.DEBIAN.chromedriver().toFile()).usingAnyFreePort().build();
         driver = new ChromeDriver(service, options);
         driver.manage().timeouts().implicitlyWait(Duration.ofSeconds(2));
     }
