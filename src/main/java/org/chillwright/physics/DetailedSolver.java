@@ -131,7 +131,8 @@ public final class DetailedSolver {
         }
         double powerW = currentA * voltageV;
         double loadW = coolingCase.heatLoadW();
-        double heatRejectedW = m.hotHeatW;
+        // passive (I = 0): reported as the lumped solve does, heat rejected = load + power
+        double heatRejectedW = currentA > 0 ? m.hotHeatW : loadW + powerW;
         double lowestK = m.lowestK;
         double highestK = m.highestK;
         boolean within = m.withinMaterialRange();
