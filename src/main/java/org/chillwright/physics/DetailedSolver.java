@@ -406,6 +406,88 @@ public final class DetailedSolver {
         }
     }
 
+    // ------------------------------------------------------------------ ratings
+
+    /**
+     * Maximum ratings of one module in the detailed model with the hot face held at {@code hotSideK}
+     * (the rating definitions of physics.md b): ΔTmax is the largest ΔT at Qc = 0, Imax the current
+     * that gives it (the peak of Qc(I) at the cold face of ΔTmax), Vmax the voltage there and Qmax the
+     * cooling at Imax with ΔT = 0. With constant properties these are the ideal forward relations.
+     *
+     * @param hotSideK hot face of the rating, K, &gt; 0
+     * @throws IllegalStateException if the searches fail (no cold face between 1 K and Th has Qc = 0)
+     */
+    public MaxRatings ratingsAt(DetailedModule module, double hotSideK) {
+        Check.positive("hotSideK", hotSideK);
+        CoupleModel model = model(DetailedArray.single(module));
+        ModuleParameters lumped = module.lumpedAt(hotSideK);
+        MaxRatings guess = lumped.ratingsAt(hotSideK);
+        double scaleA = guess.imaxA();
+        double[] lastPeak = {guess.imaxA()};
+        DoubleUnaryOperator peakHeatW = tc -> {
+            double[] peak = peakCurrent(model, tc, hotSideK, lastPeak[0], scaleA);
+            lastPeak[0] = peak[0];
+            return peak[1];
+        };
+        double highK = hotSideK;
+        double lowK = Math.max(1.0, hotSideK - 1.3 * guess.dtmaxK());
+        for (int n = 0; n < 60 && peakHeatW.applyAsDouble(lowK) > 0; n++) {
+            if (lowK <= 1.0) {
+                throw new IllegalStateException(format("no cold face above 1 K stops the cooling at %.2f K", hotSideK));
+            }
+            lowK = Math.max(1.0, hotSideK - 2 * (hotSideK - lowK));
+        }
+        double coldMinK;
+        try {
+            coldMinK = new BrentSolver(1e-12 * hotSideK, 1e-10).solve(MAX_EVALUATIONS, peakHeatW::applyAsDouble,
+                    lowK, highK, hotSideK - guess.dtmaxK());
+        } catch (NoBracketingException | MathIllegalStateException e) {
+            throw new IllegalStateException(format("detailed ΔTmax search failed at %.2f K", hotSideK), e);
+        }
+        double imaxA = peakCurrent(model, coldMinK, hotSideK, lastPeak[0], scaleA)[0];
+        if (!model.solve(imaxA, coldMinK, hotSideK)) {
+            throw new IllegalStateException(format("no steady legs at Imax %.4f A", imaxA));
+        }
+        double vmaxV = model.voltageV;
+        if (!model.solve(imaxA, hotSideK, hotSideK)) {
+            throw new IllegalStateException(format("no steady legs at Imax %.4f A and zero ΔT", imaxA));
+        }
+        return new MaxRatings(imaxA, vmaxV, model.coldHeatW, hotSideK - coldMinK, hotSideK);
+    }
+
+    /**
+     * {I, Qc} at the peak of Qc(I) between fixed faces: Newton on dQc/dI with central differences (a
+     * parabola through three points; Qc(I) is nearly quadratic there), Brent's search if that fails.
+     */
+    private static double[] peakCurrent(CoupleModel model, double tc, double th, double guessA, double scaleA) {
+        double i = guessA > 0 ? guessA : scaleA;
+        for (int n = 0; n < MAX_ITERATIONS; n++) {
+            double h = 1e-3 * scaleA;
+            double down = heat(model, i - h, tc, th);
+            double mid = heat(model, i, tc, th);
+            double up = heat(model, i + h, tc, th);
+            double curvature = (up - 2 * mid + down) / (h * h);
+            if (!(curvature < 0) || Double.isNaN(down + mid + up)) {
+                break;
+            }
+            double step = -(up - down) / (2 * h) / curvature;
+            i += step;
+            if (Math.abs(step) <= CURRENT_ACCURACY * scaleA) {
+                return new double[] {i, heat(model, i, tc, th)};
+            }
+        }
+        DoubleUnaryOperator q = c -> {
+            double v = heat(model, c, tc, th);
+            return Double.isNaN(v) ? Double.NEGATIVE_INFINITY : v;
+        };
+        double peak = peakOf(q, 0, 4 * scaleA, Math.min(Math.max(guessA, 0), 4 * scaleA));
+        return new double[] {peak, q.applyAsDouble(peak)};
+    }
+
+    private static double heat(CoupleModel model, double currentA, double tc, double th) {
+        return model.solve(currentA, tc, th) ? model.coldHeatW : Double.NaN;
+    }
+
     /** Maximum of a unimodal function of current on [low, high] by Brent's method, started near {@code guess}. */
     static double peakOf(DoubleUnaryOperator f, double low, double high, double guess) {
         double start = guess > low && guess < high ? guess : 0.5 * (low + high);
