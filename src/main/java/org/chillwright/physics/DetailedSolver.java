@@ -406,6 +406,140 @@ public final class DetailedSolver {
         }
     }
 
+    // ------------------------------------------------------------------ generator
+
+    /**
+     * Generator on a load with the heat-exchanger network of {@link GeneratorSolver} (physics.md i):
+     * Th = Tsrc − Rhx,h·Qh,in, Tc = Tsnk + Rhx,c·Qc,out, and the circuit I·RL = V(I), where the legs carry
+     * the current the module drives (the cooler current reversed). For each current the two junction
+     * temperatures come from a 2-D Newton; the current from Brent's method on [0, a current where the
+     * voltage falls below I·RL]. Empty when no steady point exists.
+     *
+     * @param loadOhm external load RL, Ω, ≥ 0
+     */
+    public Optional<DetailedGeneratorPoint> generatorAtLoad(DetailedModule module, GeneratorCase c, double loadOhm) {
+        Check.nonNegative("loadOhm", loadOhm);
+        Generator g = new Generator(model(DetailedArray.single(module)), c);
+        return g.atLoad(loadOhm, module.lumpedAt(0.5 * (c.hotSourceK() + c.coldSinkK())))
+                .map(p -> new DetailedGeneratorPoint(p, g.model.lowestK, g.model.highestK,
+                        g.model.withinMaterialRange(), module.material().name()));
+    }
+
+    /** The load of most power (Brent over ln(RL/R), R at the mean temperature) and the point there; empty if none. */
+    public Optional<DetailedGeneratorPoint> generatorMaxPower(DetailedModule module, GeneratorCase c) {
+        ModuleParameters lumped = module.lumpedAt(0.5 * (c.hotSourceK() + c.coldSinkK()));
+        Generator g = new Generator(model(DetailedArray.single(module)), c);
+        double r = lumped.resistanceOhm();
+        double span = Math.log(GeneratorSolver.LOAD_RATIO_RANGE);
+        double logRatio;
+        try {
+            logRatio = new BrentOptimizer(GeneratorSolver.LOAD_LOG_ACCURACY, GeneratorSolver.LOAD_LOG_ACCURACY)
+                    .optimize(new MaxEval(MAX_EVALUATIONS), new UnivariateObjectiveFunction(x ->
+                                    g.atLoad(r * Math.exp(x), lumped).map(GeneratorPoint::powerW).orElse(0.0)),
+                            GoalType.MAXIMIZE, new SearchInterval(-span, span, 0))
+                    .getPoint();
+        } catch (MathIllegalStateException e) {
+            return Optional.empty();
+        }
+        return generatorAtLoad(module, c, r * Math.exp(logRatio));
+    }
+
+    /** The generator problem: the couple model and the heat-exchanger network. */
+    private static final class Generator {
+        final CoupleModel model;
+        final GeneratorCase c;
+        double hotK;
+        double coldK;
+
+        Generator(CoupleModel model, GeneratorCase c) {
+            this.model = model;
+            this.c = c;
+            hotK = c.hotSourceK();
+            coldK = c.coldSinkK();
+        }
+
+        /** Junctions at a generator current by 2-D Newton; false if none. Leaves the model solved there. */
+        boolean junctions(double currentA) {
+            double rh = c.hotResistanceKPerW();
+            double rc = c.coldResistanceKPerW();
+            double th = hotK;
+            double tc = coldK;
+            for (int n = 0; n < MAX_ITERATIONS; n++) {
+                if (!model.solve(-currentA, tc, th)) {
+                    return false;
+                }
+                double heatIn = -model.hotHeatW;
+                double heatOut = -model.coldHeatW;
+                if (!model.solve(-currentA, tc, th + TEMPERATURE_STEP_K)) {
+                    return false;
+                }
+                double inT = (-model.hotHeatW - heatIn) / TEMPERATURE_STEP_K;
+                double outT = (-model.coldHeatW - heatOut) / TEMPERATURE_STEP_K;
+                if (!model.solve(-currentA, tc + TEMPERATURE_STEP_K, th)) {
+                    return false;
+                }
+                double inC = (-model.hotHeatW - heatIn) / TEMPERATURE_STEP_K;
+                double outC = (-model.coldHeatW - heatOut) / TEMPERATURE_STEP_K;
+                double r1 = th - c.hotSourceK() + rh * heatIn;
+                double r2 = tc - c.coldSinkK() - rc * heatOut;
+                double a11 = 1 + rh * inT;
+                double a12 = rh * inC;
+                double a21 = -rc * outT;
+                double a22 = 1 - rc * outC;
+                double det = a11 * a22 - a12 * a21;
+                if (!(det != 0)) {
+                    return false;
+                }
+                double stepH = -(r1 * a22 - a12 * r2) / det;
+                double stepC = -(a11 * r2 - a21 * r1) / det;
+                th += stepH;
+                tc += stepC;
+                if (!(th > 0 && tc > 0)) {
+                    return false;
+                }
+                if (Math.abs(stepH) <= TEMPERATURE_ACCURACY_K && Math.abs(stepC) <= TEMPERATURE_ACCURACY_K) {
+                    hotK = th;
+                    coldK = tc;
+                    return model.solve(-currentA, tc, th);
+                }
+            }
+            return false;
+        }
+
+        /** V the module drives minus I·RL at a generator current; NaN if no steady point. */
+        double surplusV(double currentA, double loadOhm) {
+            return junctions(currentA) ? model.voltageV - currentA * loadOhm : Double.NaN; // V = S·ΔT − I·R in the ideal case
+        }
+
+        Optional<GeneratorPoint> atLoad(double loadOhm, ModuleParameters lumped) {
+            double openV = surplusV(0, loadOhm);
+            if (!(openV > 0)) {
+                return Optional.empty();
+            }
+            double highA = 2 * openV / (lumped.resistanceOhm() + loadOhm);
+            for (int n = 0; n < 60 && surplusV(highA, loadOhm) > 0; n++) {
+                highA *= 2;
+            }
+            double currentA;
+            try {
+                currentA = new BrentSolver(1e-13 * Math.max(1, highA)).solve(MAX_EVALUATIONS,
+                        i -> {
+                            double v = surplusV(i, loadOhm);
+                            return Double.isNaN(v) ? -openV : v;
+                        }, 0, highA);
+            } catch (NoBracketingException | MathIllegalStateException e) {
+                return Optional.empty();
+            }
+            if (!junctions(currentA)) {
+                return Optional.empty();
+            }
+            double heatInW = -model.hotHeatW;
+            double powerW = currentA * model.voltageV; // delivered: −(cooler power) = Qh,in − Qc,out
+            return Optional.of(new GeneratorPoint(loadOhm, currentA, model.voltageV, powerW, powerW / heatInW, hotK,
+                    coldK, heatInW));
+        }
+    }
+
     // ------------------------------------------------------------------ ratings
 
     /**
