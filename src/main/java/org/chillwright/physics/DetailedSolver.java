@@ -55,6 +55,8 @@ public final class DetailedSolver {
     private static final double TEMPERATURE_STEP_K = 1e-5;
     /** Relative accuracy of the searches over current for a peak (flat maxima: the value is still accurate to its square). */
     private static final double PEAK_ACCURACY = 1e-9;
+    /** The parabola steps towards a peak stop below this fraction of the current scale: the peak value is then accurate to about its square. */
+    private static final double PEAK_STEP = 1e-6;
 
     private final int cells;
 
@@ -341,6 +343,8 @@ public final class DetailedSolver {
         /**
          * Most heat removable with the object held at its set-point: the maximum over I of the Q that
          * solves Qc(I, Tobj − Q·Rint,c, Th) = Q with the hot balance; {Q, I}, or NaNs if the search fails.
+         * Newton on dQ/dI with central differences (a parabola through three points, Q(I) being nearly
+         * quadratic at its peak) from the lumped model's peak current; Brent's search if that fails.
          */
         double[] capacityAtObject(double startA, double startHotK) {
             double[] state = {loadW, startHotK};
@@ -354,14 +358,47 @@ public final class DetailedSolver {
                 return s[0];
             };
             double guess = lumped != null ? lumped.currentAtMaxHeatLoadA() : Math.max(startA, 0.5 * highestCurrentA);
+            double i = guess;
+            double h = 1e-3 * currentScaleA;
+            for (int n = 0; n < 20 && i - h > 0 && i + h < highestCurrentA; n++) {
+                double down = capacityW.applyAsDouble(i - h);
+                double up = capacityW.applyAsDouble(i + h);
+                double mid = capacityW.applyAsDouble(i);
+                double curvature = (up - 2 * mid + down) / (h * h);
+                if (!(curvature < 0) || !Double.isFinite(up + mid + down)) {
+                    break;
+                }
+                double step = -(up - down) / (2 * h) / curvature;
+                if (Math.abs(step) > 0.25 * currentScaleA) {
+                    break;
+                }
+                i += step;
+                if (Math.abs(step) <= PEAK_STEP * currentScaleA) {
+                    double heatW = capacityW.applyAsDouble(i);
+                    if (Double.isFinite(heatW)) {
+                        return new double[] {heatW, i};
+                    }
+                    break;
+                }
+            }
             double peakA = peakOf(capacityW, 0, highestCurrentA, guess);
             double heatW = capacityW.applyAsDouble(peakA);
             return Double.isFinite(heatW) ? new double[] {heatW, peakA} : new double[] {Double.NaN, Double.NaN};
         }
 
-        /** {Q, Th} at a fixed current with the object at its set-point: 2-D Newton; null if none. */
+        /** Jacobian of the capacity problem, reused between calls (chord Newton); NaN until first formed. */
+        private double c11 = Double.NaN;
+        private double c12;
+        private double c21;
+        private double c22;
+
+        /**
+         * {Q, Th} at a fixed current with the object at its set-point: chord Newton with a
+         * forward-difference Jacobian, formed again only when the iteration stops contracting; null if none.
+         */
         private double[] capacityAtCurrent(double i, double q, double th) {
             double scaleW = Math.max(1e-3, Math.abs(loadW));
+            double previous = Double.POSITIVE_INFINITY;
             for (int n = 0; n < MAX_ITERATIONS; n++) {
                 double coldK = objectK - q * rc;
                 if (!(coldK > 0) || !model.solve(i, coldK, th)) {
@@ -369,30 +406,34 @@ public final class DetailedSolver {
                 }
                 double qc = model.coldHeatW;
                 double qh = model.hotHeatW;
-                double dq = TEMPERATURE_STEP_K; // perturb the cold face by a small temperature step
-                if (!model.solve(i, coldK + dq, th)) {
-                    return null;
-                }
-                double qcC = (model.coldHeatW - qc) / dq;  // ∂Qc/∂Tc
-                double qhC = (model.hotHeatW - qh) / dq;
-                if (!model.solve(i, coldK, th + TEMPERATURE_STEP_K)) {
-                    return null;
-                }
-                double qcT = (model.coldHeatW - qc) / TEMPERATURE_STEP_K;
-                double qhT = (model.hotHeatW - qh) / TEMPERATURE_STEP_K;
                 double r1 = qc - q;
                 double r2 = th - tamb - rh * qh;
-                // unknowns (Q, Th); dTc/dQ = −Rint,c
-                double a11 = -rc * qcC - 1;
-                double a12 = qcT;
-                double a21 = rh * rc * qhC;
-                double a22 = 1 - rh * qhT;
-                double det = a11 * a22 - a12 * a21;
+                double size = Math.abs(r1) / scaleW + Math.abs(r2);
+                if (Double.isNaN(c11) || size > 0.25 * previous) {
+                    double dq = TEMPERATURE_STEP_K; // perturb the cold face by a small temperature step
+                    if (!model.solve(i, coldK + dq, th)) {
+                        return null;
+                    }
+                    double qcC = (model.coldHeatW - qc) / dq;  // ∂Qc/∂Tc
+                    double qhC = (model.hotHeatW - qh) / dq;
+                    if (!model.solve(i, coldK, th + TEMPERATURE_STEP_K)) {
+                        return null;
+                    }
+                    double qcT = (model.coldHeatW - qc) / TEMPERATURE_STEP_K;
+                    double qhT = (model.hotHeatW - qh) / TEMPERATURE_STEP_K;
+                    // unknowns (Q, Th); dTc/dQ = −Rint,c
+                    c11 = -rc * qcC - 1;
+                    c12 = qcT;
+                    c21 = rh * rc * qhC;
+                    c22 = 1 - rh * qhT;
+                }
+                previous = size;
+                double det = c11 * c22 - c12 * c21;
                 if (!(det != 0)) {
                     return null;
                 }
-                double stepQ = -(r1 * a22 - a12 * r2) / det;
-                double stepT = -(a11 * r2 - a21 * r1) / det;
+                double stepQ = -(r1 * c22 - c12 * r2) / det;
+                double stepT = -(c11 * r2 - c21 * r1) / det;
                 q += stepQ;
                 th += stepT;
                 if (!(th > 0)) {

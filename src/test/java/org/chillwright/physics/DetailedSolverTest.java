@@ -102,4 +102,13 @@ class DetailedSolverTest {
         assertThat(p.currentA()).isCloseTo(lumped.currentA(), withinPercentage(5));
         assertThat(p.cop()).isCloseTo(lumped.cop(), withinPercentage(5));
     }
+
+    @Test
+    void theMaxHeatLoadIsTheEdgeBetweenHoldingAndNotHoldingTheSetPoint() {
+        // Definition of maxHeatLoadW: just below it the set-point is held, just above it is not.
+        var array = DetailedArray.single(BI2TE3_MODULE);
+        double most = ((DetailedPoint) solver.solve(array, S10, DriveLimits.NONE)).maxHeatLoadW();
+        assertThat(solver.solve(array, S10.withHeatLoadW(0.999 * most), DriveLimits.NONE).feasible()).isTrue();
+        assertThat(solver.solve(array, S10.withHeatLoadW(1.001 * most), DriveLimits.NONE).feasible()).isFalse();
+    }
 }
