@@ -127,7 +127,7 @@ public final class DetailedSolver {
         }
         CoupleModel m = cooler.model;
         double voltageV = m.voltageV;
-        Infeasible overLimit = limitViolation(limits, currentA, voltageV);
+        Infeasible overLimit = OperatingPointSolver.limitViolation(limits, currentA, voltageV);
         if (overLimit != null) {
             return overLimit;
         }
@@ -674,22 +674,6 @@ public final class DetailedSolver {
         } catch (MathIllegalStateException e) {
             throw new IllegalStateException(format("peak search failed on [%.6g, %.6g] A", low, high), e);
         }
-    }
-
-    private static Infeasible limitViolation(DriveLimits limits, double currentA, double voltageV) {
-        if (limits.hasRatedImax() && currentA > limits.ratedImaxA()) {
-            return new Infeasible(Reason.CURRENT_ABOVE_IMAX,
-                    format("needs %.2f A, above the rated Imax of %.2f A", currentA, limits.ratedImaxA()));
-        }
-        if (!Double.isNaN(limits.supplyMaxA()) && currentA > limits.supplyMaxA()) {
-            return new Infeasible(Reason.SUPPLY_CURRENT_EXCEEDED,
-                    format("needs %.2f A, above the supply's %.2f A", currentA, limits.supplyMaxA()));
-        }
-        if (!Double.isNaN(limits.supplyMaxV()) && voltageV > limits.supplyMaxV()) {
-            return new Infeasible(Reason.SUPPLY_VOLTAGE_EXCEEDED, format(
-                    "needs %.2f V at %.2f A, above the supply's %.2f V", voltageV, currentA, limits.supplyMaxV()));
-        }
-        return null;
     }
 
     static String format(String pattern, Object... args) {
