@@ -131,4 +131,16 @@ class ToleranceAnalysisTest {
         assertThat(r.marginK().p5()).isLessThan(r.marginK().p50());
         assertThat(r.marginK().p50()).isLessThan(r.marginK().p95());
     }
+
+    @Test
+    void theMarginOfADrawThatFailsIsTheSameQuantityAsTheSolvedMargin() {
+        // Identity: on a design that holds, the search used for failing draws (lowest object temperature
+        // over the allowed currents) must give Solved.marginK, so that the histogram is continuous at 0.
+        for (DriveLimits limits : new DriveLimits[] {LIMITS, DriveLimits.ofRatedImaxA(2.0), DriveLimits.NONE}) {
+            OperatingPoint point = new OperatingPointSolver().solve(TM_A, S10.withHeatLoadW(6), limits);
+            Solved solved = (Solved) point;
+            assertThat(analysis.infeasibleMarginK(ModuleArray.single(TM_A), S10.withHeatLoadW(6), limits))
+                    .isCloseTo(solved.marginK(), within(1e-6));
+        }
+    }
 }
