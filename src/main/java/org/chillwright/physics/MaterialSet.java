@@ -31,7 +31,7 @@ public record MaterialSet(String name, String source, LegMaterial p, LegMaterial
      * International Journal of Refrigeration 23(3) (2000) 208–218; the same fits as eqs. (8)–(10) of
      * X.C. Xuan et al., Cryogenics 42 (2002) 273–278. The coefficients were transcribed from public
      * research code that cites both papers; the papers themselves were not re-read here, and neither
-     * was the range of the data behind the fit (from memory: room temperature and below). At 300 K
+     * was the temperature range of the data behind the fit (so no validity range is quoted from them). At 300 K
      * they give α = 212 µV/K, ρ = 1.11e-5 Ω·m, k = 1.65 W/(m·K), ZT = 0.74, in line with the typical
      * Bi2Te3 values of physics.md d. The set is offered for 200 K to 400 K, where α, ρ and k stay
      * physical (checked by the constructor); outside it the detailed result says so.
