@@ -99,6 +99,35 @@ class HarvestEngineTest {
     }
 
     @Test
+    void rankingOfHotExchangerCoupledArraysRanksOnlyPhysicalPoints() {
+        // 427 °C source, 27 °C sink, 2 K/W on each side, up to 8 modules. Before the bracket fix the 8-module
+        // designs of TM-A came back with about 178 W at a hot face near −8e12 K and topped this ranking.
+        // Every ranked point must be one the hardware can be in, and its power what a brute-force scan of the
+        // raw node equations (GeneratorBruteForce, not the solver) gives for that design.
+        var c = new GeneratorCase(700, 300, 2, 2);
+        var ranking = engine.rank(unlimited(), harvestCase(c, 8, HarvestObjective.POWER, 0));
+        assertThat(ranking.candidates()).isNotEmpty();
+        for (var candidate : ranking.candidates()) {
+            var d = candidate.design();
+            var p = d.atMaxPower();
+            assertThat(p.coldJunctionK()).isGreaterThanOrEqualTo(300 - 1e-6).isLessThan(p.hotJunctionK());
+            assertThat(p.hotJunctionK()).isLessThanOrEqualTo(700 + 1e-6);
+            assertThat(p.voltageV()).isCloseTo(p.currentA() * p.loadOhm(), within(1e-9));
+            assertThat(p.heatInW() - p.heatOutW()).isCloseTo(p.powerW(), within(1e-9));
+        }
+        var top = ranking.candidates().get(0).design();
+        long[] ids = {A, B, E};
+        double[] resistanceOhm = {2.4, 4.8, 4.8};
+        double[] conductanceWPerK = {0.25, 0.125, 0.1};
+        int row = java.util.Arrays.stream(new int[] {0, 1, 2}).filter(i -> ids[i] == top.moduleId()).findFirst()
+                .orElseThrow();
+        var array = new ModuleParameters(0.04, resistanceOhm[row], conductanceWPerK[row])
+                .inArray(top.seriesCount(), top.parallelCount());
+        assertThat(top.atMaxPower().powerW()).isCloseTo(
+                org.chillwright.physics.GeneratorBruteForce.scanMaxPowerW(array, c), withinPercentage(1e-4));
+    }
+
+    @Test
     void withIdealHeatExchangersTheBestPowerLoadIsTheInternalResistance() {
         // matched load RL = R (physics.md i; Ioffe 1957, from memory; check-cases.json S13). The optimum is
         // flat, so the load is known to about 1e-4 of R where the power is known to 1e-9.
