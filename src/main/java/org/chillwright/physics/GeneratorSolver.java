@@ -57,6 +57,17 @@ public final class GeneratorSolver {
     }
 
     /**
+     * Hot-face temperature with no current, K: the hottest the module gets, since current draws Peltier heat
+     * out of the hot face. Only conduction K·ΔT crosses the module, so the two node balances at I = 0 give
+     * ΔT = (Tsrc − Tsnk)/(1 + (Rh + Rc)K) and Th = Tsrc − Rh·K·ΔT (hand algebra).
+     */
+    public static double openCircuitHotJunctionK(ModuleParameters module, GeneratorCase c) {
+        double k = module.conductanceWPerK();
+        double dtK = (c.hotSourceK() - c.coldSinkK()) / (1 + (c.hotResistanceKPerW() + c.coldResistanceKPerW()) * k);
+        return c.hotSourceK() - c.hotResistanceKPerW() * k * dtK;
+    }
+
+    /**
      * Steady point on a given load.
      *
      * <p>The current solves S(Th − Tc) = I(R + RL) with (Th, Tc) from the heat-exchanger system. Its

@@ -84,6 +84,39 @@ class HarvestApiControllerTest {
     }
 
     @Test
+    void acceptsSourcesUpTo1500CAndRanksTheModuleWithoutALimitWithItsWarning() {
+        // 1,500 °C: furnace and stove generators; refused with a 400 before (the limit was 1,000 °C). The modules
+        // rated 80 °C and 200 °C are refused for their hot face; HRV-HALF states no limit and is ranked, flagged.
+        var result = rank(",\"hotSourceC\":1500,\"hotResistanceKPerW\":0.5,\"coldResistanceKPerW\":0.5");
+        assertThat(result).hasStatusOk().bodyJson().extractingPath("$.candidates[*].partNumber").asArray()
+                .containsOnly("HRV-HALF");
+        assertThat(result).bodyJson().extractingPath("$.candidates[0].warnings[*].code").asArray()
+                .contains("HOT_SIDE_LIMIT_UNCHECKED");
+    }
+
+    @Test
+    void aSourceAbove1500CIsA400NamingIt() {
+        assertThat(rank(",\"hotSourceC\":1501")).hasStatus(HttpStatus.BAD_REQUEST).bodyJson()
+                .extractingPath("$.errors[*].field").asArray().contains("hotSourceC");
+    }
+
+    @Test
+    void everyDesignOfAModuleWithoutAStatedMaximumIsFlagged() throws Exception {
+        var result = rank(",\"maxModules\":4");
+        assertThat(result).hasStatusOk();
+        String body = result.getResponse().getContentAsString(java.nio.charset.StandardCharsets.UTF_8);
+        java.util.List<Object> unrated = com.jayway.jsonpath.JsonPath.read(body,
+                "$.candidates[?(@.partNumber=='HRV-HALF')]");
+        java.util.List<Object> flagged = com.jayway.jsonpath.JsonPath.read(body,
+                "$.candidates[?(@.partNumber=='HRV-HALF')].warnings[?(@.code=='HOT_SIDE_LIMIT_UNCHECKED')]");
+        java.util.List<Object> ratedFlagged = com.jayway.jsonpath.JsonPath.read(body,
+                "$.candidates[?(@.partNumber=='HRV-A')].warnings[?(@.code=='HOT_SIDE_LIMIT_UNCHECKED')]");
+        assertThat(unrated).hasSize(8); // 1 to 4 modules: 1×1, 1×2, 2×1, 1×3, 3×1, 1×4, 2×2, 4×1
+        assertThat(flagged).hasSameSizeAs(unrated);
+        assertThat(ratedFlagged).isEmpty();
+    }
+
+    @Test
     void startUpVoltageKeepsOnlyDesignsThatReachIt() {
         // one module gives 1.4 V at the matched load (S13); two in series 2.8 V
         var result = rank(",\"maxModules\":2,\"minLoadVoltageV\":2");

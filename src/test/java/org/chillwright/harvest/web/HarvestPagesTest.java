@@ -136,6 +136,26 @@ class HarvestPagesTest {
     }
 
     @Test
+    void aFurnaceSourceOf1200CIsRankedAndTheUnratedModuleIsFlagged() {
+        // refused beside the field before ("at most 1000.0 °C"); now up to 1,500 °C as on the API
+        assertThat(s13("/harvest/rank", "hotSource", "1200", "hotResistanceKPerW", "0.5", "coldResistanceKPerW",
+                "0.5")).hasStatusOk().bodyText().contains("designs evaluated").contains("HRV-HALF")
+                .contains("HOT_SIDE_LIMIT_UNCHECKED");
+    }
+
+    @Test
+    void aSourceAbove1500CIsShownBesideTheSourceField() {
+        assertThat(s13("/harvest/rank", "hotSource", "1600")).hasStatusOk().bodyText()
+                .contains("the source must be at most 1500").contains("href=\"#hotSource\"");
+    }
+
+    @Test
+    void designOfAModuleWithoutAStatedLimitCarriesTheUncheckedWarning() {
+        assertThat(s13("/harvest/design", "moduleId", String.valueOf(moduleId("HRV-HALF")))).hasStatusOk()
+                .bodyText().contains("HOT_SIDE_LIMIT_UNCHECKED").contains("is unchecked");
+    }
+
+    @Test
     void unknownModuleIsA404() {
         assertThat(s13("/harvest/design", "moduleId", "999999999")).hasStatus(HttpStatus.NOT_FOUND);
     }
