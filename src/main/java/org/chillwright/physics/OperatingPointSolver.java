@@ -104,11 +104,12 @@ public final class OperatingPointSolver {
         }
         double hotK = hotSideK(s, r, k, coldK, ambientK, rh, currentA);
         double voltageV = module.voltageV(currentA, coldK, hotK);
-        Infeasible overLimit = limitViolation(limits, currentA, voltageV);
+        Infeasible overLimit = limitViolation(limits, currentA, voltageV, hotK);
         if (overLimit != null) {
             return overLimit;
         }
-        return complete(array, module, coolingCase, limits, currentA, voltageV, coldK, hotK, coolingCase.objectK());
+        return complete(array, module, coolingCase, limits, currentA, voltageV, coldK, hotK, coolingCase.objectK(),
+                false);
     }
 
     /**
@@ -138,12 +139,12 @@ public final class OperatingPointSolver {
         double coldK = junctionK[0];
         double hotK = junctionK[1];
         double voltageV = module.voltageV(currentA, coldK, hotK);
-        Infeasible overLimit = limitViolation(limits, currentA, voltageV);
+        Infeasible overLimit = limitViolation(limits, currentA, voltageV, hotK);
         if (overLimit != null) {
             return overLimit;
         }
         double objectK = coldK + coolingCase.coldInterfaceKPerW() * coolingCase.heatLoadW();
-        return complete(array, module, coolingCase, limits, currentA, voltageV, coldK, hotK, objectK);
+        return complete(array, module, coolingCase, limits, currentA, voltageV, coldK, hotK, objectK, true);
     }
 
     /**
@@ -593,7 +594,12 @@ public final class OperatingPointSolver {
         return new double[] {(b1 * a22 - a12 * b2) / det, (a11 * b2 - a21 * b1) / det};
     }
 
-    private static Infeasible limitViolation(DriveLimits limits, double currentA, double voltageV) {
+    /**
+     * The first limit the point breaks, or null: rated Imax, supply current, supply voltage, then the hot face
+     * (the module's stated maximum, or 250 °C when it states none: beyond that a point is of no physical use,
+     * whatever the equations give).
+     */
+    private static Infeasible limitViolation(DriveLimits limits, double currentA, double voltageV, double hotK) {
         if (limits.hasRatedImax() && currentA > limits.ratedImaxA()) {
             return new Infeasible(Reason.CURRENT_ABOVE_IMAX,
                     format("needs %.2f A, above the rated Imax of %.2f A", currentA, limits.ratedImaxA()));
@@ -605,6 +611,15 @@ public final class OperatingPointSolver {
         if (!Double.isNaN(limits.supplyMaxV()) && voltageV > limits.supplyMaxV()) {
             return new Infeasible(Reason.SUPPLY_VOLTAGE_EXCEEDED, format(
                     "needs %.2f V at %.2f A, above the supply's %.2f V", voltageV, currentA, limits.supplyMaxV()));
+        }
+        if (!(hotK <= limits.hotFaceLimitK())) {
+            boolean stated = !Double.isNaN(limits.maxHotSideK());
+            return new Infeasible(stated ? Reason.HOT_SIDE_ABOVE_LIMIT : Reason.HOT_SIDE_BEYOND_USE, format(
+                    "at %.2f A the hot face would reach %.1f °C, above %s of %.1f °C: use a better heat sink, less"
+                            + " current, or a larger module", currentA, Units.celsiusFromKelvin(hotK),
+                    stated ? "the module's stated maximum" : "the 250 °C this tool allows for a module that states no"
+                            + " maximum (solder and ceramics give out before; common practice)",
+                    Units.celsiusFromKelvin(limits.hotFaceLimitK())));
         }
         return null;
     }
@@ -630,8 +645,13 @@ public final class OperatingPointSolver {
                 Units.celsiusFromKelvin(c.objectK())));
     }
 
+    /**
+     * The full answer at a solved point. {@code fixedDrive} says the current was given (or followed from a given
+     * voltage) rather than solved for the load at the set-point; only then can the point be over-driven.
+     */
     private static Solved complete(ModuleArray array, ModuleParameters module, CoolingCase c, DriveLimits limits,
-                                   double currentA, double voltageV, double coldK, double hotK, double objectK) {
+                                   double currentA, double voltageV, double coldK, double hotK, double objectK,
+                                   boolean fixedDrive) {
         double s = module.seebeckVPerK();
         double r = module.resistanceOhm();
         double k = module.conductanceWPerK();
@@ -644,8 +664,14 @@ public final class OperatingPointSolver {
         double cop = powerW > 0 ? loadW / powerW : Double.POSITIVE_INFINITY;
         // Everything that does not wait for the capacity and margin iterations comes first: its
         // divisions and square roots then overlap with those latency-bound iterations in the core.
+        double perD = 1 / (1 + rh * k - rh * s * currentA);
+        double thSlope = rh * (r * currentA + s * hotK) * perD;          // Th'
+        double slope = s * coldK - r * currentA - k * thSlope;           // Qc' = dQc/dI at this cold face
         double dewPointK = dewPointK(c);
         List<Warning> warnings = warnings(module, limits, currentA, coldK, hotK, dewPointK);
+        if (fixedDrive) {
+            warnings = overDriveWarnings(warnings, currentA, slope, objectK, ambientK);
+        }
         double fractionOfImax = limits.hasRatedImax() ? currentA / limits.ratedImaxA() : Double.NaN;
         double copOptimalA = module.copOptimalCurrentA(coldK, hotK);
         double maxCop = module.maxCop(coldK, hotK);
@@ -654,10 +680,7 @@ public final class OperatingPointSolver {
         // Start of the capacity peak: Qc' is concave in I (Qc‴ ≤ 0, see currentForLoadA), and the root
         // nearest zero of its second-order Taylor polynomial at the solved current is a near-peak
         // current. Th'' and Th‴ = 3·Rh·S·Th''/d follow from Th' without another division.
-        double perD = 1 / (1 + rh * k - rh * s * currentA);
-        double thSlope = rh * (r * currentA + s * hotK) * perD;          // Th'
         double thCurvature = rh * (r + 2 * s * thSlope) * perD;          // Th''
-        double slope = s * coldK - r * currentA - k * thSlope;           // Qc'
         double curvature = -r - k * thCurvature;                         // Qc'' < 0
         double thirdDerivative = -3 * k * rh * s * thCurvature * perD;   // Qc‴ ≤ 0
         // The discriminant is ≥ Qc''² left of the peak (Qc' > 0, Qc‴ ≤ 0); only over-driven fixed-current
@@ -702,12 +725,6 @@ public final class OperatingPointSolver {
                             + " the COP collapses)",
                     hotK - coldK, 100 * (hotK - coldK) / dtMaxK, dtMaxK, 100 * NEAR_DTMAX_FRACTION));
         }
-        if (!Double.isNaN(limits.maxHotSideK()) && hotK > limits.maxHotSideK()) {
-            warnings = add(warnings, Warning.Code.HOT_SIDE_ABOVE_LIMIT, format(
-                    "the hot face reaches %.2f K (%.1f °C), above the module's %.2f K (%.1f °C)",
-                    hotK, Units.celsiusFromKelvin(hotK), limits.maxHotSideK(),
-                    Units.celsiusFromKelvin(limits.maxHotSideK())));
-        }
         if (!Double.isNaN(dewPointK) && coldK < dewPointK + DEW_POINT_MARGIN_K) {
             warnings = add(warnings, Warning.Code.CONDENSATION_RISK, coldK < dewPointK
                     ? format("the cold face at %.1f °C is below the ambient dew point %.1f °C: water will condense on "
@@ -718,6 +735,29 @@ public final class OperatingPointSolver {
                             Units.celsiusFromKelvin(dewPointK)));
         }
         return warnings == null ? List.of() : warnings;
+    }
+
+    /**
+     * At a fixed drive: over-driven when dQc/dI &lt; 0 at the point (beyond the capacity peak, more current
+     * cools less: the side of the upper root that the set-point solve never returns), and the cooled
+     * part warmer than the ambient.
+     */
+    private static List<Warning> overDriveWarnings(List<Warning> warnings, double currentA, double slopeWPerA,
+                                                   double objectK, double ambientK) {
+        List<Warning> list = warnings.isEmpty() ? null : new ArrayList<>(warnings);
+        if (currentA > 0 && slopeWPerA < 0) {
+            list = add(list, Warning.Code.OVER_DRIVEN, format(
+                    "at %.2f A the module is past its capacity peak: each extra ampere pumps %.2f W less, so less"
+                            + " current would hold the part colder and draw less power", currentA, -slopeWPerA));
+        }
+        if (objectK > ambientK) {
+            list = add(list, Warning.Code.OBJECT_ABOVE_AMBIENT, format(
+                    "the cooled part settles at %.1f °C, %.1f K above the %.1f °C ambient: at this drive the cooler"
+                            + " does not bring it below ambient%s", Units.celsiusFromKelvin(objectK),
+                    objectK - ambientK, Units.celsiusFromKelvin(ambientK),
+                    currentA > 0 && slopeWPerA < 0 ? " and its own heat warms it" : ""));
+        }
+        return list == null ? List.of() : list;
     }
 
     private static List<Warning> add(List<Warning> warnings, Warning.Code code, String sentence) {

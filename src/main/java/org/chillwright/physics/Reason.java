@@ -15,5 +15,12 @@ public enum Reason {
     /** The current needed is above the supply's maximum (e.5). */
     SUPPLY_CURRENT_EXCEEDED,
     /** A two-stage cascade has no interstage temperature between its cold and hot sides (h). */
-    INTERSTAGE_OUT_OF_RANGE
+    INTERSTAGE_OUT_OF_RANGE,
+    /** The hot face would pass the module's stated maximum temperature. */
+    HOT_SIDE_ABOVE_LIMIT,
+    /**
+     * The hot face would pass 250 °C, beyond any use of a module that states no maximum temperature
+     * ({@link SafetyLimits#HOT_FACE_WITHOUT_STATED_LIMIT_K}).
+     */
+    HOT_SIDE_BEYOND_USE
 }

@@ -16,12 +16,20 @@ public record Warning(Code code, String sentence) {
         /** ΔT above 0.7 × ΔTmax at the solved hot-side temperature. */
         NEAR_DTMAX,
         /**
-         * Hot face above the module's stated maximum temperature; for a generator, the hot junction with the
-         * load disconnected (its hottest state).
+         * Generator: the hot junction with the load disconnected (its hottest state) above the module's stated
+         * maximum temperature. A cooler's hot face above that limit is infeasible instead
+         * ({@link Reason#HOT_SIDE_ABOVE_LIMIT}).
          */
         HOT_SIDE_ABOVE_LIMIT,
         /** Generator: the module states no maximum temperature, so its hot junction cannot be checked. */
         HOT_SIDE_LIMIT_UNCHECKED,
+        /**
+         * Cooler at a fixed current or voltage beyond the capacity peak: dQc/dI &lt; 0 at the point, so more
+         * current would cool less (and less current more).
+         */
+        OVER_DRIVEN,
+        /** Cooler at a fixed current or voltage: the cooled part settles warmer than the ambient. */
+        OBJECT_ABOVE_AMBIENT,
         /** Cold face below the ambient dew point + 2 K. */
         CONDENSATION_RISK,
         /** The array's voltage is above 60 V DC ({@link SafetyLimits#SHOCK_HAZARD_ABOVE_V}). */

@@ -3,7 +3,6 @@ package org.chillwright.selection;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import java.util.List;
 import java.util.stream.IntStream;
 import org.chillwright.physics.CoolingCase;
 import org.chillwright.physics.DriveLimits;
@@ -12,14 +11,15 @@ import org.chillwright.physics.ModuleArray;
 import org.chillwright.physics.ModuleParameters;
 import org.chillwright.physics.OperatingPoint;
 import org.chillwright.physics.OperatingPointSolver;
+import org.chillwright.physics.SafetyLimits;
 import org.chillwright.physics.Solved;
 
 /**
  * Solves every module in every series × parallel split against one case and ranks the designs.
  *
  * <p>Rank first, detail later: a first pass runs the allocation-free lower-root solve
- * ({@link OperatingPointSolver#currentForLoadA}) for every design and checks the rated Imax and the
- * supply on its terminal values; only the designs that are shown (and, for the margin objective, every
+ * ({@link OperatingPointSolver#currentForLoadA}) for every design and checks the rated Imax, the
+ * supply and the hot-face limit on its terminal values; only the designs that are shown (and, for the margin objective, every
  * feasible one) get the full solve with capacity peak, margin in K and warnings. The two passes use the
  * same equations, so a design feasible in the first is feasible in the second.
  */
@@ -49,6 +49,13 @@ public final class RankingEngine {
         double supplyV = rankingCase.supplyMaxV();
         double supplyA = rankingCase.supplyMaxA();
 
+        // the hot face a design may reach: the module's stated maximum, or 250 °C when it states none
+        double[] hotFaceLimitK = new double[n];
+        for (int i = 0; i < n; i++) {
+            double statedK = table.maxHotSideK()[i];
+            hotFaceLimitK[i] = Double.isNaN(statedK) ? SafetyLimits.HOT_FACE_WITHOUT_STATED_LIMIT_K : statedK;
+        }
+
         // pass 1: terminal current, power and fraction of Imax of every design; NaN current = infeasible
         double[] currentA = new double[designs];
         double[] powerW = new double[designs];
@@ -65,7 +72,8 @@ public final class RankingEngine {
                 double imaxA = table.ratedImaxA()[i] * parallel;
                 double hotK = OperatingPointSolver.hotSideK(s, r, g, coldK, ambientK, hotPathKPerW, current);
                 double voltage = s * (hotK - coldK) + current * r;
-                boolean withinLimits = !(current > imaxA) && !(current > supplyA) && !(voltage > supplyV);
+                boolean withinLimits = !(current > imaxA) && !(current > supplyA) && !(voltage > supplyV)
+                        && !(hotK > hotFaceLimitK[i]);
                 currentA[d] = withinLimits ? current : Double.NaN;
                 powerW[d] = current * voltage;
                 fraction[d] = current / imaxA;

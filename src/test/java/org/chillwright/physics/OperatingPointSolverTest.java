@@ -251,10 +251,74 @@ class OperatingPointSolverTest {
     }
 
     @Test
-    void warnsAboveMaxHotSide() {
+    void aHotFaceAboveTheStatedMaximumIsInfeasible() {
+        // the S10 point runs its hot face at about 303 K (check case S10), above a stated 300 K
         var limits = new DriveLimits(Double.NaN, Double.NaN, Double.NaN, 300);
-        Solved point = solved(solver.solve(TM_A, S10, limits));
-        assertThat(point.hasWarning(Warning.Code.HOT_SIDE_ABOVE_LIMIT)).isTrue();
+        Infeasible point = infeasible(solver.solve(TM_A, S10, limits));
+        assertThat(point.reason()).isEqualTo(Reason.HOT_SIDE_ABOVE_LIMIT);
+        assertThat(point.detail()).contains("stated maximum of 26.9 °C");
+    }
+
+    /**
+     * Object temperature at a fixed current, written here from the raw balances rather than the solver's
+     * 2x2 system: the cold face pumps the load, Q = S·I·Tc − ½I²R − K(Th − Tc), and the hot path carries the
+     * load plus the electrical power, Th = Tamb + Rh·(Q + I·(S(Th − Tc) + I·R)) (ideal equations, A.F. Ioffe,
+     * Semiconductor Thermoelements and Thermoelectric Cooling, 1957, from memory; first law). Linear in (Tc, Th).
+     */
+    private static double objectAtCurrentK(ModuleParameters m, CoolingCase c, double i) {
+        double s = m.seebeckVPerK();
+        double r = m.resistanceOhm();
+        double k = m.conductanceWPerK();
+        double rh = c.hotPathKPerW();
+        double q = c.heatLoadW();
+        // (S·I + K)·Tc − K·Th = Q + ½I²R;  Rh·S·I·Tc + (1 − Rh·S·I)·Th = Tamb + Rh·(Q + I²R)
+        double a11 = s * i + k;
+        double a12 = -k;
+        double a21 = rh * s * i;
+        double a22 = 1 - rh * s * i;
+        double b1 = q + 0.5 * i * i * r;
+        double b2 = c.ambientK() + rh * (q + i * i * r);
+        double tc = (b1 * a22 - a12 * b2) / (a11 * a22 - a12 * a21);
+        return tc + c.coldInterfaceKPerW() * q;
+    }
+
+    @Test
+    void theS10SetUpAt8AIsOverDrivenAndEndsWarmerThanTheAmbient() {
+        // The set-up of check case S10 driven at 8 A, beyond its 3.8 A capacity peak: the object settles at
+        // 311.64 K (the raw balances above), 13.5 K above the 298.15 K ambient; the warnings list was empty.
+        Solved point = solved(solver.atCurrent(ModuleArray.single(TM_A), S10, DriveLimits.NONE, 8));
+        assertThat(point.objectK()).isCloseTo(objectAtCurrentK(TM_A, S10, 8), within(1e-9))
+                .isCloseTo(311.64, within(0.005));
+        // more current warms it: the sign of dQc/dI < 0, seen on the raw balances
+        assertThat(objectAtCurrentK(TM_A, S10, 8.01)).isGreaterThan(objectAtCurrentK(TM_A, S10, 8));
+        assertThat(point.warnings()).extracting(Warning::code)
+                .contains(Warning.Code.OVER_DRIVEN, Warning.Code.OBJECT_ABOVE_AMBIENT);
+    }
+
+    @Test
+    void aCurrentBelowThePeakIsNotOverDriven() {
+        // at 2 A the S10 set-up still cools as current rises (raw balances) and stays below ambient
+        Solved point = solved(solver.atCurrent(ModuleArray.single(TM_A), S10, DriveLimits.NONE, 2));
+        assertThat(objectAtCurrentK(TM_A, S10, 2.01)).isLessThan(objectAtCurrentK(TM_A, S10, 2));
+        assertThat(point.warnings()).extracting(Warning::code)
+                .doesNotContain(Warning.Code.OVER_DRIVEN, Warning.Code.OBJECT_ABOVE_AMBIENT);
+    }
+
+    @Test
+    void theSetPointSolveIsNeverOverDriven() {
+        // the lower root lies left of the capacity peak (physics: the upper root is the over-driven one)
+        Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
+        assertThat(point.warnings()).extracting(Warning::code).doesNotContain(Warning.Code.OVER_DRIVEN);
+    }
+
+    @Test
+    void hundredVoltsThroughA3KPerWHotPathIsInfeasibleNotThousandsOfKelvin() {
+        // The S10 set-up with a 3 K/W hot path (2.95 sink + 0.05 interface) at 100 V: the equations give a hot
+        // face near 3,380 K. A module without a stated maximum is allowed 250 °C (common practice, no source).
+        var weak = new CoolingCase(298.15, 298.15, 10, 2.95, 0.1, 0.05);
+        Infeasible point = infeasible(solver.atVoltage(ModuleArray.single(TM_A), weak, DriveLimits.NONE, 100));
+        assertThat(point.reason()).isEqualTo(Reason.HOT_SIDE_BEYOND_USE);
+        assertThat(point.detail()).contains("250.0 °C").contains("states no maximum");
     }
 
     @Test

@@ -57,6 +57,18 @@ class RankingEngineTest {
     }
 
     @Test
+    void aModuleWhoseHotFacePassesItsStatedMaximumIsRefusedForThat() {
+        // A stated at 25 °C: every design runs its hot face above the 25 °C ambient, so none may be shown
+        var limited = new CandidateTable(new long[] {A}, new double[] {0.04}, new double[] {2.4},
+                new double[] {0.25}, new double[] {3.8}, new double[] {70}, new double[] {Units.kelvinFromCelsius(25)},
+                CandidateTable.PriceBook.NONE);
+        var ranking = engine.rank(limited, rankingCase(s10(10), 2, Objective.COP));
+        assertThat(ranking.candidates()).isEmpty();
+        assertThat(ranking.infeasible()).singleElement().satisfies(r -> assertThat(r.code())
+                .isEqualTo("HOT_SIDE_ABOVE_LIMIT"));
+    }
+
+    @Test
     void largestArrayTriedIsNamedInTheReason() {
         var ranking = engine.rank(table(CandidateTable.PriceBook.NONE), rankingCase(s10(10), 2, Objective.COP));
         assertThat(ranking.infeasible()).singleElement().satisfies(r -> {

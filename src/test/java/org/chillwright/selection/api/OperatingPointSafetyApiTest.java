@@ -1,0 +1,50 @@
+package org.chillwright.selection.api;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import org.junit.jupiter.api.Test;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.springframework.http.MediaType;
+import org.springframework.test.web.servlet.assertj.MockMvcTester;
+import org.springframework.test.web.servlet.assertj.MvcTestResult;
+
+/**
+ * How the operating-point route tells a script that a design can hurt someone or mislead: warnings on
+ * solved points, reasons on infeasible ones. Module TM-A (S 0.04 V/K, R 2.4 Ω, K 0.25 W/K) in the set-up of
+ * check case S10 (10 W, 25 °C ambient, 0.3 K/W sink, interfaces 0.1 cold and 0.05 hot K/W).
+ */
+@SpringBootTest
+@AutoConfigureMockMvc
+class OperatingPointSafetyApiTest {
+
+    private static final String TM_A = "{\"seebeckVPerK\":0.04,\"resistanceOhm\":2.4,\"conductanceWPerK\":0.25}";
+
+    @Autowired
+    MockMvcTester mvc;
+
+    private MvcTestResult operatingPoint(String fields) {
+        return mvc.post().uri("/api/v1/operating-point").contentType(MediaType.APPLICATION_JSON)
+                .content("{\"module\":" + TM_A + ",\"ambientC\":25,\"heatLoadW\":10,\"hotInterfaceKPerW\":0.05,"
+                        + "\"coldInterfaceKPerW\":0.1" + fields + "}")
+                .exchange();
+    }
+
+    @Test
+    void aCoolerDrivenPastItsPeakSaysSo() {
+        // 8 A on the S10 set-up: the part settles at 38.5 °C, above the 25 °C ambient (see
+        // OperatingPointSolverTest for the value from the raw balances)
+        assertThat(operatingPoint(",\"sinkResistanceKPerW\":0.3,\"currentA\":8")).hasStatusOk().bodyJson()
+                .extractingPath("$.warnings[*].code").asArray().contains("OVER_DRIVEN", "OBJECT_ABOVE_AMBIENT");
+    }
+
+    @Test
+    void aRunawayHotFaceIsInfeasibleWithItsReason() {
+        // 100 V through a 3 K/W hot path: the equations give about 3,100 °C; no module survives 250 °C unstated
+        var result = operatingPoint(",\"sinkResistanceKPerW\":2.95,\"voltageV\":100");
+        assertThat(result).hasStatusOk().bodyJson().extractingPath("$.feasible").isEqualTo(false);
+        assertThat(result).bodyJson().extractingPath("$.reason.code").isEqualTo("HOT_SIDE_BEYOND_USE");
+        assertThat(result).bodyJson().extractingPath("$.hotSideC").isNull();
+    }
+}
