@@ -62,6 +62,7 @@ public final class OperatingPointSolver {
     static final double DEW_POINT_MARGIN_K = 2.0;
 
     private static final DewPoint DEW_POINT = new DewPointMagnus();
+    private static final double FREEZING_K = Units.kelvinFromCelsius(0);
 
     /**
      * Lower-root current that removes the case's load at its object temperature, single module.
@@ -668,7 +669,8 @@ public final class OperatingPointSolver {
         double thSlope = rh * (r * currentA + s * hotK) * perD;          // Th'
         double slope = s * coldK - r * currentA - k * thSlope;           // Qc' = dQc/dI at this cold face
         double dewPointK = dewPointK(c);
-        List<Warning> warnings = warnings(module, limits, currentA, coldK, hotK, dewPointK);
+        double frostPointK = frostPointK(c, dewPointK);
+        List<Warning> warnings = warnings(module, limits, currentA, coldK, hotK, ambientK, dewPointK, frostPointK);
         if (fixedDrive) {
             warnings = overDriveWarnings(warnings, currentA, slope, objectK, ambientK);
         }
@@ -696,22 +698,30 @@ public final class OperatingPointSolver {
                 : atLimitK;
         double marginK = objectK - (lowestColdK + loadW * rc);
         return new Solved(currentA, voltageV, powerW, cop, objectK, coldK, hotK, rejectedW, loadW, fractionOfImax,
-                atObject.heatW(), atObject.currentA(), marginK, copOptimalA, maxCop, dewPointK, warnings, perModule);
+                atObject.heatW(), atObject.currentA(), marginK, copOptimalA, maxCop, dewPointK, frostPointK, warnings,
+                perModule);
     }
 
+    /** Dew point of the ambient air, K; NaN without a humidity or outside the model's air range. */
     private static double dewPointK(CoolingCase c) {
-        if (!c.hasRelativeHumidity()) {
+        if (!c.hasRelativeHumidity() || !withinDewPointModel(c.ambientK())) {
             return Double.NaN;
-        }
-        double airC = Units.celsiusFromKelvin(c.ambientK());
-        if (airC < DewPointMagnus.LOWEST_AIR_C || airC > DewPointMagnus.HIGHEST_AIR_C) {
-            return Double.NaN; // outside the fit: no dew point rather than an extrapolated one
         }
         return DEW_POINT.dewPointK(c.ambientK(), c.relativeHumidity());
     }
 
+    /** Frost point of the ambient air, K, when its dew point is below 0 °C; else NaN. */
+    private static double frostPointK(CoolingCase c, double dewPointK) {
+        return dewPointK < FREEZING_K ? DEW_POINT.frostPointK(c.ambientK(), c.relativeHumidity()) : Double.NaN;
+    }
+
+    private static boolean withinDewPointModel(double airK) {
+        double airC = Units.celsiusFromKelvin(airK);
+        return airC >= DEW_POINT.lowestAirC() && airC <= DEW_POINT.highestAirC();
+    }
+
     private static List<Warning> warnings(ModuleParameters module, DriveLimits limits, double currentA, double coldK,
-                                          double hotK, double dewPointK) {
+                                          double hotK, double ambientK, double dewPointK, double frostPointK) {
         List<Warning> warnings = null;
         if (limits.hasRatedImax() && currentA > NEAR_IMAX_FRACTION * limits.ratedImaxA()) {
             warnings = add(warnings, Warning.Code.NEAR_IMAX, format(
@@ -725,16 +735,51 @@ public final class OperatingPointSolver {
                             + " the COP collapses)",
                     hotK - coldK, 100 * (hotK - coldK) / dtMaxK, dtMaxK, 100 * NEAR_DTMAX_FRACTION));
         }
-        if (!Double.isNaN(dewPointK) && coldK < dewPointK + DEW_POINT_MARGIN_K) {
-            warnings = add(warnings, Warning.Code.CONDENSATION_RISK, coldK < dewPointK
-                    ? format("the cold face at %.1f °C is below the ambient dew point %.1f °C: water will condense on "
-                            + "it; seal, insulate or purge the cold side, or raise the set-point",
-                            Units.celsiusFromKelvin(coldK), Units.celsiusFromKelvin(dewPointK))
-                    : format("the cold face at %.1f °C is less than %.0f K above the ambient dew point %.1f °C: "
-                            + "seal or purge the cold side", Units.celsiusFromKelvin(coldK), DEW_POINT_MARGIN_K,
-                            Units.celsiusFromKelvin(dewPointK)));
+        if (!Double.isNaN(dewPointK)) {
+            warnings = moistureWarning(warnings, coldK, ambientK, dewPointK, frostPointK);
         }
         return warnings == null ? List.of() : warnings;
+    }
+
+    /**
+     * Water on the cold face: below 0 °C dew point the frost point governs (ice forms there first, and melts
+     * to water when the cooler stops), else the dew point; a warning within {@link #DEW_POINT_MARGIN_K} of it.
+     * Outside the Magnus fit (air below −40 °C or above 50 °C) the value is extrapolated, the margin doubled,
+     * and the sentence says so.
+     */
+    private static List<Warning> moistureWarning(List<Warning> warnings, double coldK, double ambientK,
+                                                 double dewPointK, double frostPointK) {
+        double airC = Units.celsiusFromKelvin(ambientK);
+        boolean extrapolated = !DEW_POINT.withinFit(airC);
+        double marginK = extrapolated ? 2 * DEW_POINT_MARGIN_K : DEW_POINT_MARGIN_K;
+        boolean frost = !Double.isNaN(frostPointK);
+        double pointK = frost ? frostPointK : dewPointK;
+        if (!(coldK < pointK + marginK)) {
+            return warnings;
+        }
+        String point = frost ? "frost point" : "dew point";
+        String note = extrapolated ? format(" (the air at %.1f °C is outside the −40 to 50 °C range of the Magnus fit,"
+                + " so the %s is extrapolated and the margin doubled to %.0f K)", airC, point, marginK) : "";
+        String sentence;
+        if (frost) {
+            sentence = coldK < frostPointK
+                    ? format("the cold face at %.1f °C is below the ambient frost point %.1f °C (dew point %.1f °C):"
+                            + " ice will build on it and melt to water when the cooler stops; seal, insulate or purge"
+                            + " the cold side, or raise the set-point%s", Units.celsiusFromKelvin(coldK),
+                            Units.celsiusFromKelvin(frostPointK), Units.celsiusFromKelvin(dewPointK), note)
+                    : format("the cold face at %.1f °C is less than %.0f K above the ambient frost point %.1f °C:"
+                            + " seal or purge the cold side%s", Units.celsiusFromKelvin(coldK), marginK,
+                            Units.celsiusFromKelvin(frostPointK), note);
+        } else {
+            sentence = coldK < dewPointK
+                    ? format("the cold face at %.1f °C is below the ambient dew point %.1f °C: water will condense on "
+                            + "it; seal, insulate or purge the cold side, or raise the set-point%s",
+                            Units.celsiusFromKelvin(coldK), Units.celsiusFromKelvin(dewPointK), note)
+                    : format("the cold face at %.1f °C is less than %.0f K above the ambient dew point %.1f °C: "
+                            + "seal or purge the cold side%s", Units.celsiusFromKelvin(coldK), marginK,
+                            Units.celsiusFromKelvin(dewPointK), note);
+        }
+        return add(warnings, frost ? Warning.Code.FROST_RISK : Warning.Code.CONDENSATION_RISK, sentence);
     }
 
     /**

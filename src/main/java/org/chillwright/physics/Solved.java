@@ -24,13 +24,15 @@ import java.util.List;
  * @param copOptimalCurrentA    current of best COP at the solved junction temperatures, A (physics.md f)
  * @param maxCop                best COP at the solved junction temperatures (physics.md f)
  * @param dewPointK             dew point of the ambient air, K; NaN when the humidity is unknown
+ * @param frostPointK           frost point of the ambient air, K, when its dew point is below 0 °C; else NaN
  * @param warnings              risks, empty when none
  * @param perModule             what one module of the array carries
  */
 public record Solved(double currentA, double voltageV, double powerW, double cop, double objectK, double coldSideK,
                      double hotSideK, double heatRejectedW, double heatLoadW, double fractionOfImax,
                      double maxHeatLoadW, double currentAtMaxHeatLoadA, double marginK, double copOptimalCurrentA,
-                     double maxCop, double dewPointK, List<Warning> warnings, ModuleShare perModule)
+                     double maxCop, double dewPointK, double frostPointK, List<Warning> warnings,
+                     ModuleShare perModule)
         implements OperatingPoint {
 
     public Solved {

@@ -30,8 +30,10 @@ public record Warning(Code code, String sentence) {
         OVER_DRIVEN,
         /** Cooler at a fixed current or voltage: the cooled part settles warmer than the ambient. */
         OBJECT_ABOVE_AMBIENT,
-        /** Cold face below the ambient dew point + 2 K. */
+        /** Cold face below the ambient dew point + 2 K (dew point at or above 0 °C; 4 K when extrapolated). */
         CONDENSATION_RISK,
+        /** Cold face below the ambient frost point + 2 K, when the dew point is below 0 °C (4 K when extrapolated). */
+        FROST_RISK,
         /** The array's voltage is above 60 V DC ({@link SafetyLimits#SHOCK_HAZARD_ABOVE_V}). */
         SHOCK_HAZARD_VOLTAGE
     }

@@ -330,6 +330,38 @@ class OperatingPointSolverTest {
     }
 
     @Test
+    void hotHumidAirOutsideTheMagnusFitStillWarnsAndSaysItIsExtrapolated() {
+        // 55 °C and 90 % RH: dew point 52.8 °C by the extrapolated Magnus form (52.82 °C by the ASHRAE 2017
+        // formulation, see DewPointMagnusTest); a 25 °C cold face is far below it. This used to be silent.
+        var tropical = new CoolingCase(Units.kelvinFromCelsius(25), Units.kelvinFromCelsius(55), 2, 0.3, 0, 0.05)
+                .withRelativeHumidity(0.9);
+        Solved point = solved(solver.solve(TM_A, tropical, DriveLimits.NONE));
+        assertThat(Units.celsiusFromKelvin(point.dewPointK())).isCloseTo(52.83, within(0.005));
+        assertThat(point.warnings()).filteredOn(w -> w.code() == Warning.Code.CONDENSATION_RISK).singleElement()
+                .satisfies(w -> assertThat(w.sentence()).contains("below the ambient dew point 52.8 °C")
+                        .contains("extrapolated"));
+    }
+
+    @Test
+    void aColdFaceBelowTheFrostPointWarnsWithTheFrostPoint() {
+        // 25 °C air at 10 % RH: dew point −8.76 °C, frost point −7.77 °C (ASHRAE 2017 via PsychroLib: −7.75 °C,
+        // see DewPointMagnusTest). A cold face at −8 °C is above the dew point but below the frost point.
+        var dry = new CoolingCase(Units.kelvinFromCelsius(-8), Units.kelvinFromCelsius(25), 1, 0.1, 0, 0)
+                .withRelativeHumidity(0.1);
+        Solved point = solved(solver.solve(TM_A, dry, DriveLimits.NONE));
+        assertThat(Units.celsiusFromKelvin(point.frostPointK())).isCloseTo(-7.77, within(0.005));
+        assertThat(point.warnings()).filteredOn(w -> w.code() == Warning.Code.FROST_RISK).singleElement()
+                .satisfies(w -> assertThat(w.sentence()).contains("below the ambient frost point -7.8 °C")
+                        .contains("ice"));
+    }
+
+    @Test
+    void aDewPointAboveFreezingHasNoFrostPoint() {
+        Solved point = solved(solver.solve(TM_A, S10.withRelativeHumidity(0.6), DriveLimits.NONE));
+        assertThat(point.frostPointK()).isNaN();
+    }
+
+    @Test
     void fixedVoltageReachesTheFixedCurrentPoint() {
         // Consistency of e.2 and e.3: driving at the voltage of a 2.5 A point gives 2.5 A back.
         var c = new CoolingCase(298.15, 298.15, 8, 0.35, 0.1, 0.0);

@@ -159,12 +159,21 @@ class ComputationApiController {
     }
 
     @GetMapping("/dew-point")
-    @Operation(summary = "Dew point of air (Magnus form, Alduchov and Eskridge 1996)")
+    @Operation(summary = "Dew point of air, and its frost point when the dew point is below 0 °C",
+            description = "Magnus form over water and over ice (Alduchov and Eskridge 1996); relative humidity with "
+                    + "respect to water. Fitted for air from -40 to 50 °C; from -100 to 200 °C the values are "
+                    + "extrapolated and the answer says so (above 50 °C the extrapolated dew point errs high).")
     DewPointResponse dewPoint(
-            @RequestParam @NotNull @DecimalMin("-40") @DecimalMax("50") Double airC,
+            @RequestParam @NotNull @DecimalMin("-100") @DecimalMax("200") Double airC,
             @RequestParam @NotNull @DecimalMin(value = "0", inclusive = false) @DecimalMax("100")
             Double relativeHumidityPct) {
-        return new DewPointResponse(dewPoint.dewPointC(airC, Units.fractionFromPercent(relativeHumidityPct)));
+        double relativeHumidity = Units.fractionFromPercent(relativeHumidityPct);
+        double dewPointC = dewPoint.dewPointC(airC, relativeHumidity);
+        Double frostPointC = dewPointC < 0 ? dewPoint.frostPointC(airC, relativeHumidity) : null;
+        boolean extrapolated = !dewPoint.withinFit(airC);
+        String note = extrapolated ? "the air temperature is outside the -40 to 50 °C range of the Magnus fit: "
+                + "extrapolated values; allow a wider margin" : null;
+        return new DewPointResponse(dewPointC, frostPointC, extrapolated, note);
     }
 
     private ModuleParameters stage(CascadeRequest.Stage stage, String field) {

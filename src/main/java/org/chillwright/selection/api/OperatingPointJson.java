@@ -21,7 +21,7 @@ final class OperatingPointJson {
         var i = (Infeasible) point;
         return new OperatingPointResponse(false, new OperatingPointResponse.ReasonJson(i.reason().name(), i.detail()),
                 null, null, null, null, null, null, null, null, null, null, null, null, null, null, null, null,
-                null, List.of(), null, seriesCount, parallelCount);
+                null, null, List.of(), null, seriesCount, parallelCount);
     }
 
     private static OperatingPointResponse solved(Solved s, int seriesCount, int parallelCount) {
@@ -33,6 +33,7 @@ final class OperatingPointJson {
                 number(s.maxHeatLoadW()), number(s.currentAtMaxHeatLoadA()), number(s.loadMarginPct()),
                 number(s.marginK()), number(s.copOptimalCurrentA()), number(s.maxCop()),
                 Double.isNaN(s.dewPointK()) ? null : celsius(s.dewPointK()),
+                Double.isNaN(s.frostPointK()) ? null : celsius(s.frostPointK()),
                 s.warnings().stream()
                         .map(w -> new OperatingPointResponse.WarningJson(w.code().name(), w.sentence())).toList(),
                 new OperatingPointResponse.PerModule(share.currentA(), share.voltageV(), share.heatLoadW(),

@@ -211,8 +211,8 @@ class ComputationApiControllerTest {
     }
 
     @Test
-    void dewPointOutsideTheFittedRangeIsA400() throws Exception {
-        mvc.perform(get("/api/v1/dew-point").param("airC", "80").param("relativeHumidityPct", "50"))
+    void dewPointBeyondTheExtrapolatedRangeIsA400() throws Exception {
+        mvc.perform(get("/api/v1/dew-point").param("airC", "201").param("relativeHumidityPct", "50"))
                 .andExpect(status().isBadRequest())
                 .andExpect(jsonPath("$.errors[0].field").value("airC"));
     }

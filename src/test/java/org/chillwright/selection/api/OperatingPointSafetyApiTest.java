@@ -1,6 +1,7 @@
 package org.chillwright.selection.api;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
 
 import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
@@ -46,5 +47,44 @@ class OperatingPointSafetyApiTest {
         assertThat(result).hasStatusOk().bodyJson().extractingPath("$.feasible").isEqualTo(false);
         assertThat(result).bodyJson().extractingPath("$.reason.code").isEqualTo("HOT_SIDE_BEYOND_USE");
         assertThat(result).bodyJson().extractingPath("$.hotSideC").isNull();
+    }
+
+    private MvcTestResult dewPoint(String airC, String relativeHumidityPct) {
+        return mvc.get().uri("/api/v1/dew-point").param("airC", airC).param("relativeHumidityPct", relativeHumidityPct)
+                .exchange();
+    }
+
+    @Test
+    void dewPointOfHotHumidAirIsExtrapolatedAndSaysSo() {
+        // 55 °C, 90 %: 52.83 °C by the Magnus form extrapolated beyond its 50 °C fit (52.82 °C ASHRAE 2017,
+        // see DewPointMagnusTest); it used to be a 400
+        var result = dewPoint("55", "90");
+        assertThat(result).hasStatusOk().bodyJson().extractingPath("$.dewPointC").asNumber()
+                .satisfies(d -> assertThat(d.doubleValue()).isCloseTo(52.83, within(0.005)));
+        assertThat(result).bodyJson().extractingPath("$.extrapolated").isEqualTo(true);
+        assertThat(result).bodyJson().extractingPath("$.note").asString().contains("extrapolated");
+        assertThat(result).bodyJson().doesNotHavePath("$.frostPointC");
+    }
+
+    @Test
+    void dewPointBelowFreezingComesWithTheFrostPoint() {
+        // 25 °C, 10 %: dew point −8.76 °C, frost point −7.77 °C (ASHRAE 2017 via PsychroLib: −7.75 °C)
+        var result = dewPoint("25", "10");
+        assertThat(result).hasStatusOk().bodyJson().extractingPath("$.frostPointC").asNumber()
+                .satisfies(f -> assertThat(f.doubleValue()).isCloseTo(-7.77, within(0.005)));
+        assertThat(result).bodyJson().extractingPath("$.extrapolated").isEqualTo(false);
+    }
+
+    @Test
+    void theOperatingPointWarnsOfFrostWithTheFrostPoint() {
+        // cold face held at −8 °C (no cold interface) in 25 °C air at 10 %: below the −7.77 °C frost point
+        var result = mvc.post().uri("/api/v1/operating-point").contentType(MediaType.APPLICATION_JSON)
+                .content("{\"module\":" + TM_A + ",\"objectC\":-8,\"ambientC\":25,\"heatLoadW\":1,"
+                        + "\"sinkResistanceKPerW\":0.1,\"relativeHumidityPct\":10}")
+                .exchange();
+        assertThat(result).hasStatusOk().bodyJson().extractingPath("$.warnings[*].code").asArray()
+                .contains("FROST_RISK");
+        assertThat(result).bodyJson().extractingPath("$.frostPointC").asNumber()
+                .satisfies(f -> assertThat(f.doubleValue()).isCloseTo(-7.77, within(0.005)));
     }
 }
