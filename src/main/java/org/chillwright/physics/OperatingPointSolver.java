@@ -670,7 +670,8 @@ public final class OperatingPointSolver {
         double slope = s * coldK - r * currentA - k * thSlope;           // Qc' = dQc/dI at this cold face
         double dewPointK = dewPointK(c);
         double frostPointK = frostPointK(c, dewPointK);
-        List<Warning> warnings = warnings(module, limits, currentA, coldK, hotK, ambientK, dewPointK, frostPointK);
+        List<Warning> warnings = warnings(module, limits, currentA, voltageV, coldK, hotK, ambientK, dewPointK,
+                frostPointK);
         if (fixedDrive) {
             warnings = overDriveWarnings(warnings, currentA, slope, objectK, ambientK);
         }
@@ -720,8 +721,9 @@ public final class OperatingPointSolver {
         return airC >= DEW_POINT.lowestAirC() && airC <= DEW_POINT.highestAirC();
     }
 
-    private static List<Warning> warnings(ModuleParameters module, DriveLimits limits, double currentA, double coldK,
-                                          double hotK, double ambientK, double dewPointK, double frostPointK) {
+    private static List<Warning> warnings(ModuleParameters module, DriveLimits limits, double currentA, double voltageV,
+                                          double coldK, double hotK, double ambientK, double dewPointK,
+                                          double frostPointK) {
         List<Warning> warnings = null;
         if (limits.hasRatedImax() && currentA > NEAR_IMAX_FRACTION * limits.ratedImaxA()) {
             warnings = add(warnings, Warning.Code.NEAR_IMAX, format(
@@ -737,6 +739,11 @@ public final class OperatingPointSolver {
         }
         if (!Double.isNaN(dewPointK)) {
             warnings = moistureWarning(warnings, coldK, ambientK, dewPointK, frostPointK);
+        }
+        if (SafetyLimits.isShockHazard(voltageV)) {
+            List<Warning> list = warnings == null ? new ArrayList<>(1) : warnings;
+            list.add(SafetyLimits.shockHazard("the terminal voltage", voltageV));
+            warnings = list;
         }
         return warnings == null ? List.of() : warnings;
     }

@@ -356,6 +356,21 @@ class OperatingPointSolverTest {
     }
 
     @Test
+    void anArrayAbove60VIsAShockHazard() {
+        // eight small modules in series (S 0.04 V/K, R 24 Ω, K 0.025 W/K each) on the S10 set-up: 11 W needs
+        // 63.3 V at the terminals, 10 W 55.8 V. 60 V DC: the usual extra-low-voltage limit for dry locations
+        // (common practice, no source).
+        var string = new ModuleArray(new ModuleParameters(0.04, 24, 0.025), 8, 1);
+        Solved high = solved(solver.solve(string, S10.withHeatLoadW(11), DriveLimits.NONE));
+        Solved low = solved(solver.solve(string, S10, DriveLimits.NONE));
+        assertThat(high.voltageV()).isGreaterThan(60);
+        assertThat(high.warnings()).filteredOn(w -> w.code() == Warning.Code.SHOCK_HAZARD_VOLTAGE).singleElement()
+                .satisfies(w -> assertThat(w.sentence()).contains("63.3 V").contains("local codes"));
+        assertThat(low.voltageV()).isLessThan(60);
+        assertThat(low.hasWarning(Warning.Code.SHOCK_HAZARD_VOLTAGE)).isFalse();
+    }
+
+    @Test
     void aDewPointAboveFreezingHasNoFrostPoint() {
         Solved point = solved(solver.solve(TM_A, S10.withRelativeHumidity(0.6), DriveLimits.NONE));
         assertThat(point.frostPointK()).isNaN();

@@ -87,4 +87,16 @@ class OperatingPointSafetyApiTest {
         assertThat(result).bodyJson().extractingPath("$.frostPointC").asNumber()
                 .satisfies(f -> assertThat(f.doubleValue()).isCloseTo(-7.77, within(0.005)));
     }
+
+    @Test
+    void anArrayAbove60VCarriesTheShockHazardWarning() {
+        // eight small modules in series on the S10 set-up at 11 W: 63.3 V (see OperatingPointSolverTest)
+        var result = mvc.post().uri("/api/v1/operating-point").contentType(MediaType.APPLICATION_JSON)
+                .content("{\"module\":{\"seebeckVPerK\":0.04,\"resistanceOhm\":24,\"conductanceWPerK\":0.025},"
+                        + "\"seriesCount\":8,\"objectC\":5,\"ambientC\":25,\"heatLoadW\":11,"
+                        + "\"sinkResistanceKPerW\":0.3,\"coldInterfaceKPerW\":0.1,\"hotInterfaceKPerW\":0.05}")
+                .exchange();
+        assertThat(result).hasStatusOk().bodyJson().extractingPath("$.warnings[*].code").asArray()
+                .contains("SHOCK_HAZARD_VOLTAGE");
+    }
 }
