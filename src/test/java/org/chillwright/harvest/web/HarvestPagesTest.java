@@ -71,6 +71,24 @@ class HarvestPagesTest {
     }
 
     @Test
+    void theFormCarriesTheBurnAndFireCautions() {
+        assertThat(mvc.get().uri("/harvest")).hasStatusOk().bodyText().contains("Burns and fire")
+                .contains("burn on touch").contains("ignite").contains("local codes");
+    }
+
+    @Test
+    void theRankingCarriesTheBurnAndFireCautions() {
+        assertThat(s13("/harvest/rank")).hasStatusOk().bodyText().contains("Burns and fire")
+                .contains("burn on touch").contains("ignite");
+    }
+
+    @Test
+    void theDesignCarriesTheBurnAndFireCautions() {
+        assertThat(s13("/harvest/design", "moduleId", String.valueOf(moduleId("HRV-A")))).hasStatusOk().bodyText()
+                .contains("Burns and fire").contains("ignite");
+    }
+
+    @Test
     void navigationLeadsToTheHarvestPage() {
         assertThat(mvc.get().uri("/")).hasStatusOk().bodyText().contains("href=\"/harvest\"");
     }
