@@ -85,6 +85,10 @@ public final class OperatingPointSolver {
      * @param limits      rated Imax of the array, supply limits, hot-side limit (any may be absent)
      */
     public OperatingPoint solve(ModuleArray array, CoolingCase coolingCase, DriveLimits limits) {
+        return withCapacity(solvePoint(array, coolingCase, limits), array.equivalent(), coolingCase);
+    }
+
+    private static OperatingPoint solvePoint(ModuleArray array, CoolingCase coolingCase, DriveLimits limits) {
         ModuleParameters module = array.equivalent();
         double s = module.seebeckVPerK();
         double r = module.resistanceOhm();
@@ -124,6 +128,11 @@ public final class OperatingPointSolver {
      */
     public OperatingPoint atCurrent(ModuleArray array, CoolingCase coolingCase, DriveLimits limits, double currentA) {
         Check.nonNegative("currentA", currentA);
+        return withCapacity(atCurrentPoint(array, coolingCase, limits, currentA), array.equivalent(), coolingCase);
+    }
+
+    private static OperatingPoint atCurrentPoint(ModuleArray array, CoolingCase coolingCase, DriveLimits limits,
+                                                 double currentA) {
         ModuleParameters module = array.equivalent();
         double s = module.seebeckVPerK();
         double r = module.resistanceOhm();
@@ -172,9 +181,9 @@ public final class OperatingPointSolver {
         double highA = Math.min(voltageV / r, runawayA * RUNAWAY_GUARD);
         for (int doubling = 0; surplusV.applyAsDouble(highA) < 0; doubling++) {
             if (doubling == 64 || highA >= runawayA * RUNAWAY_GUARD) {
-                return new Infeasible(Reason.HEAT_SINK_RUNAWAY, format(
+                return withCapacity(new Infeasible(Reason.HEAT_SINK_RUNAWAY, format(
                         "no steady state reaches %.2f V: the hot side runs away from %.2f A before the voltage"
-                                + " is reached", voltageV, runawayA));
+                                + " is reached", voltageV, runawayA)), module, coolingCase);
             }
             highA = Math.min(2 * highA, runawayA * RUNAWAY_GUARD);
         }
@@ -596,6 +605,37 @@ public final class OperatingPointSolver {
     }
 
     /**
+     * An infeasible point with the capacity at the case's object temperature filled in (the most heat that can be
+     * removed there with this heat sink, and its current), so that a script sees how far off the design is.
+     */
+    private static OperatingPoint withCapacity(OperatingPoint point, ModuleParameters module, CoolingCase c) {
+        if (point instanceof Infeasible i && Double.isNaN(i.maxHeatLoadW())) {
+            PeakPoint capacity = capacityAtObject(module, c);
+            return new Infeasible(i.reason(), i.detail(), capacity.heatW(), capacity.currentA());
+        }
+        return point;
+    }
+
+    /**
+     * Most heat removable with the object held at the case's temperature, from no solved point: the search starts
+     * at the peak with the cold face at the object temperature (zero load through the cold interface), or at
+     * that peak's heat when it is negative, so that Qpk(Tobj − Q·Rint,c) ≥ Q holds at the start
+     * (see {@link #capacityAtObject(double, double, double, double, double, double, double, double, double, double)}).
+     */
+    static PeakPoint capacityAtObject(ModuleParameters module, CoolingCase c) {
+        double s = module.seebeckVPerK();
+        double r = module.resistanceOhm();
+        double k = module.conductanceWPerK();
+        double objectK = c.objectK();
+        double rc = c.coldInterfaceKPerW();
+        double tamb = c.ambientK();
+        double rh = c.hotPathKPerW();
+        double peakA = peakCurrentA(s, r, k, objectK, tamb, rh, Double.NaN);
+        double startW = Math.min(0.0, coldHeatW(s, r, k, objectK, tamb, rh, peakA));
+        return capacityAtObject(s, r, k, objectK, rc, tamb, rh, startW, peakA, objectK - startW * rc);
+    }
+
+    /**
      * The first limit the point breaks, or null: rated Imax, supply current, supply voltage, then the hot face
      * (the module's stated maximum, or 250 °C when it states none: beyond that a point is of no physical use,
      * whatever the equations give).
@@ -643,7 +683,7 @@ public final class OperatingPointSolver {
                 "needs %.2f W of cooling at a cold face of %.2f K; with this heat sink the peak there is %.2f W"
                         + " at %.2f A, and at most %.2f W can be removed while holding the object at %.2f K (%.2f °C)",
                 c.heatLoadW(), coldK, peakW, peakA, atObject.heatW(), c.objectK(),
-                Units.celsiusFromKelvin(c.objectK())));
+                Units.celsiusFromKelvin(c.objectK())), atObject.heatW(), atObject.currentA());
     }
 
     /**

@@ -168,18 +168,21 @@ public final class RankingEngine {
         }
 
         var rejections = new ArrayList<Ranking.Rejection>();
+        int[] largest = configs[configs.length - 1];
         for (int i = 0; i < n; i++) {
             if (anyFeasible[i]) {
                 if (!shown[i] && belowMargin[i]) {
-                    rejections.add(new Ranking.Rejection(table.moduleIds()[i], BELOW_MIN_MARGIN,
+                    rejections.add(rejection(table.moduleIds()[i], BELOW_MIN_MARGIN,
                             "every design shown with this module leaves less than the required "
-                                    + rankingCase.minMarginK() + " K of margin"));
+                                    + rankingCase.minMarginK() + " K of margin", largest,
+                            solve(table, i, largest, rankingCase, c)));
                 }
                 continue;
             }
             if (onlyAboveFraction[i]) {
-                rejections.add(new Ranking.Rejection(table.moduleIds()[i], ABOVE_IMAX_FRACTION, String.format(
-                        "every design that works needs more than %.0f %% of the rated Imax", 100 * maxFraction)));
+                rejections.add(rejection(table.moduleIds()[i], ABOVE_IMAX_FRACTION, String.format(
+                        "every design that works needs more than %.0f %% of the rated Imax", 100 * maxFraction),
+                        largest, solve(table, i, largest, rankingCase, c)));
                 continue;
             }
             rejections.add(reasonFor(table, configs, i, rankingCase, c));
@@ -218,17 +221,35 @@ public final class RankingEngine {
         if (point instanceof Infeasible infeasible) {
             String prefix = configs.length == 1 ? "" : "even " + largest[0] + " in series × " + largest[1]
                     + " in parallel: ";
-            return new Ranking.Rejection(table.moduleIds()[i], infeasible.reason().name(), prefix + infeasible.detail());
+            return rejection(table.moduleIds()[i], infeasible.reason().name(), prefix + infeasible.detail(), largest,
+                    infeasible);
         }
         // the largest design works but needs more than a smaller one's limits allow (e.g. supply volts)
         for (int[] config : configs) {
             if (solve(table, i, config, rankingCase, c) instanceof Infeasible infeasible) {
-                return new Ranking.Rejection(table.moduleIds()[i], infeasible.reason().name(), infeasible.detail());
+                return rejection(table.moduleIds()[i], infeasible.reason().name(), infeasible.detail(), config,
+                        infeasible);
             }
         }
         // every design sits within the solver's tolerance of a limit: the two passes disagree only there
-        return new Ranking.Rejection(table.moduleIds()[i], AT_A_LIMIT,
-                "every design of this module runs right at its current or supply limit");
+        return rejection(table.moduleIds()[i], AT_A_LIMIT,
+                "every design of this module runs right at its current or supply limit", largest, point);
+    }
+
+    /** A rejection carrying the capacity at the set-point of the design it names (solved or not). */
+    private static Ranking.Rejection rejection(long moduleId, String code, String message, int[] config,
+                                               OperatingPoint point) {
+        double maxHeatLoadW = Double.NaN;
+        double currentAtMaxHeatLoadA = Double.NaN;
+        if (point instanceof Solved solved) {
+            maxHeatLoadW = solved.maxHeatLoadW();
+            currentAtMaxHeatLoadA = solved.currentAtMaxHeatLoadA();
+        } else if (point instanceof Infeasible infeasible) {
+            maxHeatLoadW = infeasible.maxHeatLoadW();
+            currentAtMaxHeatLoadA = infeasible.currentAtMaxHeatLoadA();
+        }
+        return new Ranking.Rejection(moduleId, code, message, config[0], config[1], maxHeatLoadW,
+                currentAtMaxHeatLoadA);
     }
 
     /**

@@ -236,6 +236,37 @@ class OperatingPointSolverTest {
     }
 
     @Test
+    void aLoadAboveCapacityStillCarriesTheCapacityAtTheSetPoint() {
+        // check case S11: 25 W on the S10 set-up cannot be held. The most that can be removed at 5 °C with this
+        // heat sink, and its current, from a brute-force scan of the raw balances (CoolerBruteForce)
+        var s11 = S10.withHeatLoadW(25);
+        Infeasible point = infeasible(solver.solve(TM_A, s11, DriveLimits.NONE));
+        double[] capacity = CoolerBruteForce.capacityAtObject(TM_A, s11);
+        assertThat(point.reason()).isEqualTo(Reason.LOAD_ABOVE_CAPACITY);
+        assertThat(point.maxHeatLoadW()).isCloseTo(capacity[0], within(1e-6)).isLessThan(25);
+        assertThat(point.currentAtMaxHeatLoadA()).isCloseTo(capacity[1], within(1e-4));
+    }
+
+    @Test
+    void aPointRefusedForItsCurrentLimitStillCarriesItsCapacity() {
+        // S10 needs 1.96 A; a 1.5 A rating refuses it, but the set-point capacity is the design's all the same
+        Infeasible point = infeasible(solver.solve(TM_A, S10, DriveLimits.ofRatedImaxA(1.5)));
+        double[] capacity = CoolerBruteForce.capacityAtObject(TM_A, S10);
+        assertThat(point.reason()).isEqualTo(Reason.CURRENT_ABOVE_IMAX);
+        assertThat(point.maxHeatLoadW()).isCloseTo(capacity[0], within(1e-6));
+        assertThat(point.currentAtMaxHeatLoadA()).isCloseTo(capacity[1], within(1e-4));
+    }
+
+    @Test
+    void aRunawayAtFixedCurrentStillCarriesTheCapacityAtTheCaseTemperature() {
+        var weakSink = new CoolingCase(278.15, 298.15, 1, 9.95, 0.1, 0.05);
+        Infeasible point = infeasible(solver.atCurrent(ModuleArray.single(TM_A), weakSink, DriveLimits.NONE, 6));
+        assertThat(point.reason()).isEqualTo(Reason.HEAT_SINK_RUNAWAY);
+        assertThat(point.maxHeatLoadW()).isCloseTo(CoolerBruteForce.capacityAtObject(TM_A, weakSink)[0],
+                within(1e-6));
+    }
+
+    @Test
     void warnsNearImax() {
         // Threshold 0.8·Imax: common practice (no source).
         Solved point = solved(solver.solve(TM_A, S10, DriveLimits.ofRatedImaxA(2.2)));

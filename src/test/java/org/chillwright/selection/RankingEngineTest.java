@@ -1,10 +1,13 @@
 package org.chillwright.selection;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
 import static org.assertj.core.api.Assertions.withinPercentage;
 
 import java.util.List;
+import org.chillwright.physics.CoolerBruteForce;
 import org.chillwright.physics.CoolingCase;
+import org.chillwright.physics.ModuleParameters;
 import org.chillwright.physics.Units;
 import org.junit.jupiter.api.Test;
 
@@ -66,6 +69,25 @@ class RankingEngineTest {
         assertThat(ranking.candidates()).isEmpty();
         assertThat(ranking.infeasible()).singleElement().satisfies(r -> assertThat(r.code())
                 .isEqualTo("HOT_SIDE_ABOVE_LIMIT"));
+    }
+
+    @Test
+    void aRefusedModuleCarriesTheCapacityOfTheDesignItsReasonNames() {
+        // B (R 4.8 Ω, K 0.125 W/K) and C (R 24 Ω, K 0.025 W/K) alone cannot take 10 W at 5 °C; how much they can
+        // is the brute-force capacity of the raw balances (CoolerBruteForce), not the solver's own number
+        var ranking = engine.rank(table(CandidateTable.PriceBook.NONE), rankingCase(s10(10), 1, Objective.COP));
+        double[] b = CoolerBruteForce.capacityAtObject(new ModuleParameters(0.04, 4.8, 0.125), s10(10));
+        double[] c = CoolerBruteForce.capacityAtObject(new ModuleParameters(0.04, 24, 0.025), s10(10));
+        assertThat(ranking.infeasible()).extracting(Ranking.Rejection::maxHeatLoadW)
+                .satisfiesExactly(w -> assertThat(w).isCloseTo(b[0], within(1e-6)),
+                        w -> assertThat(w).isCloseTo(c[0], within(1e-6)));
+        assertThat(ranking.infeasible()).extracting(Ranking.Rejection::currentAtMaxHeatLoadA)
+                .satisfiesExactly(i -> assertThat(i).isCloseTo(b[1], within(1e-4)),
+                        i -> assertThat(i).isCloseTo(c[1], within(1e-4)));
+        assertThat(ranking.infeasible()).allSatisfy(r -> {
+            assertThat(r.seriesCount()).isEqualTo(1);
+            assertThat(r.parallelCount()).isEqualTo(1);
+        });
     }
 
     @Test

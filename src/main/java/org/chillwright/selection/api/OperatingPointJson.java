@@ -19,8 +19,10 @@ final class OperatingPointJson {
             return solved(s, seriesCount, parallelCount);
         }
         var i = (Infeasible) point;
+        // the capacity at the set-point stays, so a script sees how far off the design is
         return new OperatingPointResponse(false, new OperatingPointResponse.ReasonJson(i.reason().name(), i.detail()),
-                null, null, null, null, null, null, null, null, null, null, null, null, null, null, null, null,
+                null, null, null, null, null, null, null, null, null, null,
+                number(i.maxHeatLoadW()), number(i.currentAtMaxHeatLoadA()), null, null, null, null,
                 null, null, List.of(), null, seriesCount, parallelCount);
     }
 

@@ -3,6 +3,8 @@ package org.chillwright.selection.api;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
+import org.chillwright.catalog.CatalogService;
+import org.chillwright.selection.TestCatalog;
 import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
@@ -24,6 +26,8 @@ class OperatingPointSafetyApiTest {
 
     @Autowired
     MockMvcTester mvc;
+    @Autowired
+    CatalogService catalog;
 
     private MvcTestResult operatingPoint(String fields) {
         return mvc.post().uri("/api/v1/operating-point").contentType(MediaType.APPLICATION_JSON)
@@ -98,5 +102,39 @@ class OperatingPointSafetyApiTest {
                 .exchange();
         assertThat(result).hasStatusOk().bodyJson().extractingPath("$.warnings[*].code").asArray()
                 .contains("SHOCK_HAZARD_VOLTAGE");
+    }
+
+    @Test
+    void anInfeasiblePointStillReturnsTheCapacityAtTheSetPoint() {
+        // check case S11: 25 W at 5 °C on the S10 set-up is too much; the most that can be removed with the object
+        // at 5 °C is 14.52 W (the brute-force scan in OperatingPointSolverTest agrees with the solver to 1e-6 W;
+        // S11's 14.1 W is the peak at the colder face that 25 W through the interface would need)
+        var result = mvc.post().uri("/api/v1/operating-point").contentType(MediaType.APPLICATION_JSON)
+                .content("{\"module\":" + TM_A + ",\"objectC\":5,\"ambientC\":25,\"heatLoadW\":25,"
+                        + "\"sinkResistanceKPerW\":0.3,\"coldInterfaceKPerW\":0.1,\"hotInterfaceKPerW\":0.05}")
+                .exchange();
+        assertThat(result).hasStatusOk().bodyJson().extractingPath("$.feasible").isEqualTo(false);
+        assertThat(result).bodyJson().extractingPath("$.maxHeatLoadW").asNumber()
+                .satisfies(w -> assertThat(w.doubleValue()).isBetween(14.5, 14.55));
+        assertThat(result).bodyJson().extractingPath("$.currentAtMaxHeatLoadA").asNumber()
+                .satisfies(i -> assertThat(i.doubleValue()).isPositive());
+    }
+
+    @Test
+    void aRefusedModuleInARankingCarriesTheCapacityOfTheDesignNamed() {
+        TestCatalog.ensure(catalog);
+        var result = mvc.post().uri("/api/v1/rankings").contentType(MediaType.APPLICATION_JSON)
+                .content("{\"objectC\":5,\"ambientC\":25,\"heatLoadW\":10,\"sinkResistanceKPerW\":0.3,"
+                        + "\"coldInterfaceKPerW\":0.1,\"hotInterfaceKPerW\":0.05,\"maxModules\":1,\"supplier\":\""
+                        + TestCatalog.SUPPLIER_B + "\"}")
+                .exchange();
+        // TMA-HALF holds at most about 8.7 W at 5 °C with this sink (RankingEngineTest checks the value against
+        // the brute-force scan); a script reads it without parsing the sentence
+        assertThat(result).hasStatusOk().bodyJson()
+                .extractingPath("$.infeasible[?(@.partNumber=='TMA-HALF')].maxHeatLoadW").asArray().singleElement()
+                .satisfies(w -> assertThat(((Number) w).doubleValue()).isBetween(8.0, 9.5));
+        assertThat(result).bodyJson()
+                .extractingPath("$.infeasible[?(@.partNumber=='TMA-HALF')].currentAtMaxHeatLoadA").asArray()
+                .singleElement().satisfies(i -> assertThat(((Number) i).doubleValue()).isPositive());
     }
 }
