@@ -8,7 +8,7 @@ import jakarta.validation.constraints.Positive;
 import jakarta.validation.constraints.PositiveOrZero;
 
 /**
- * A module as a request describes it (DESIGN.md): by maximum ratings, by lumped parameters, by
+ * A module as a request describes it (the HTTP contract): by maximum ratings, by lumped parameters, by
  * construction, or by a catalog id. Exactly one of the four shapes may be given; {@link #shape()} says
  * which, and {@link ModuleResolver} turns it into physics parameters. Units are in the names (°C, mm).
  * {@code maxOperatingC}, the module's stated maximum temperature, may come with any shape but a catalog

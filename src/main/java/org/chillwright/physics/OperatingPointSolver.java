@@ -10,11 +10,13 @@ import org.apache.commons.math3.exception.MathIllegalStateException;
 import org.apache.commons.math3.exception.NoBracketingException;
 
 /**
- * Steady operating point of a heat-sink-coupled cooler (physics.md e): the current that removes a
- * load at a required object temperature (e.1), or the object temperature reached at a fixed
- * current (e.2) or voltage (e.3). Ideal constant-property equations (physics.md a) with the
- * thermal network Tc = Tobj − Q·Rint,c and Th = Tamb + Qh·Rh, Rh = Rint,h + Rsink (physics.md e,
- * derived there; cases S10, S10b, S11, S12).
+ * Steady operating point of a heat-sink-coupled cooler: the current that removes a load at a required
+ * object temperature, or the object temperature reached at a fixed current or voltage. Ideal
+ * constant-property equations Qc = S·I·Tc − ½I²R − K(Th − Tc), Qh = Qc + I·V, V = S(Th − Tc) + I·R
+ * (A.F. Ioffe, Semiconductor Thermoelements and Thermoelectric Cooling, 1957; H.J. Goldsmid, Introduction
+ * to Thermoelectricity, 2016; both from memory) with the series thermal network Tc = Tobj − Q·Rint,c and
+ * Th = Tamb + Qh·Rh, Rh = Rint,h + Rsink; the closed forms and bounds below are derived here from those
+ * equations and checked against brute-force scans in the tests (check cases S10, S10b, S11, S12).
  *
  * <p>Stateless and thread-safe. The static {@link #currentForLoadA} and {@link #copAtLoad} are the
  * allocation-free path for ranking many candidates; {@link #solve} adds the capacity, margins,
@@ -25,7 +27,7 @@ public final class OperatingPointSolver {
     /**
      * Newton stops once a step in current is below this, A. The iterations converge quadratically,
      * so the error left after a 1e-9 A step is many orders smaller, well inside the 1e-9 relative
-     * accuracy physics.md asks for at currents of 0.1 A and up.
+     * accuracy the check cases ask for at currents of 0.1 A and up.
      */
     static final double CURRENT_ACCURACY_A = 1e-9;
     /**
@@ -54,11 +56,11 @@ public final class OperatingPointSolver {
     /** Fraction of the runaway current used as the end of a bracket: at the runaway current itself Th is infinite. */
     private static final double RUNAWAY_GUARD = 1 - 1e-9;
 
-    /** Warn above this fraction of rated Imax: common practice (no source), physics.md l. */
+    /** Warn above this fraction of rated Imax: common practice (no source). */
     static final double NEAR_IMAX_FRACTION = 0.8;
-    /** Warn above this fraction of ΔTmax at the solved hot side: common practice (no source), physics.md l. */
+    /** Warn above this fraction of ΔTmax at the solved hot side: common practice (no source). */
     static final double NEAR_DTMAX_FRACTION = 0.7;
-    /** Warn when the cold face is less than this above the dew point, K: common practice (no source), physics.md k. */
+    /** Warn when the cold face is less than this above the dew point, K: common practice (no source). */
     static final double DEW_POINT_MARGIN_K = 2.0;
 
     private static final DewPoint DEW_POINT = new DewPointMagnus();
@@ -73,7 +75,7 @@ public final class OperatingPointSolver {
     }
 
     /**
-     * Current that removes {@code heatLoadW} from the object held at {@code objectK} (physics.md e.1).
+     * Current that removes {@code heatLoadW} from the object held at {@code objectK}.
      * Returns the lower root of Qc(I) = Qload (low current, low power, high COP; the upper root is
      * on the over-driven side and never returned), I = 0 when conduction alone carries the load
      * (passive case), or {@link Infeasible} with {@link Reason#DELTA_T_BEYOND_REACH},
@@ -118,7 +120,7 @@ public final class OperatingPointSolver {
     }
 
     /**
-     * Object temperature reached at a fixed terminal current with the case's load (physics.md e.2,
+     * Object temperature reached at a fixed terminal current with the case's load (derived here; check
      * case S12): the linear 2x2 system
      * (S·I + K)Tc − K·Th = Q + ½RI², −Rh·K·Tc + (1 + Rh·K − Rh·S·I)Th = Tamb + ½Rh·R·I², by Cramer's
      * rule; Tobj = Tc + Rint,c·Q. Its determinant is K + S·I − Rh·S²·I²; at or below zero there is no
@@ -158,7 +160,7 @@ public final class OperatingPointSolver {
     }
 
     /**
-     * Object temperature reached at a fixed terminal voltage with the case's load (physics.md e.3):
+     * Object temperature reached at a fixed terminal voltage with the case's load:
      * a 1-D root in I of S(Th − Tc) + I·R = V with (Tc, Th) from the fixed-current system, found by
      * Brent's method on a bracket from 0 (where the voltage is at most 0) to a current where it
      * exceeds V. The case's {@code objectK} is not used.
@@ -199,8 +201,8 @@ public final class OperatingPointSolver {
     }
 
     /**
-     * Peak of the heat-sink-coupled Qc(I) at a fixed cold face (physics.md e, "Concavity"; cases S10b,
-     * S11): the root of dQc/dI = 0 on [0, min(S·Tc/R, I_run)].
+     * Peak of the heat-sink-coupled Qc(I) at a fixed cold face (Qc is concave in I, see
+     * {@link #currentForLoadA}; cases S10b, S11): the root of dQc/dI = 0 on [0, min(S·Tc/R, I_run)].
      *
      * @param module       module (or array equivalent) parameters
      * @param coldSideK    cold-face temperature Tc, K, &gt; 0
@@ -230,8 +232,9 @@ public final class OperatingPointSolver {
      * with α = Th·d at the runaway current, α ≥ 0; so Th‴ = 6α(Rh·S)³/d⁴ ≥ 0 and Qc‴ = −K·Th‴ ≤ 0.
      * Qc″ therefore only falls as I grows, the Taylor polynomial lies on or above Qc for I ≥ 0, and
      * its root is at or left of the lower root. With an ideal sink (Rh = 0) Qc is exactly that
-     * quadratic and the start is the closed form of physics.md e (case S09), which the first step only
-     * confirms. Qc(I) is concave on [0, I_run) (physics.md e), so every tangent lies above the curve:
+     * quadratic and the start is the closed form of {@link ModuleParameters#currentForLoadA} (case S09),
+     * which the first step only confirms. Qc(I) is concave on [0, I_run) (Th(I) is convex there), so every
+     * tangent lies above the curve:
      * from a point left of the lower root each Newton step lands at or left of that root, and the
      * iterates rise monotonically to it, never reaching the upper root. If the slope becomes ≤ 0 (or
      * the step passes the runaway current) before the load is reached, the iterates have passed the
@@ -247,7 +250,7 @@ public final class OperatingPointSolver {
      */
     public static double currentForLoadA(double seebeckVPerK, double resistanceOhm, double conductanceWPerK,
                                          double coldSideK, double ambientK, double hotPathKPerW, double heatLoadW) {
-        double s = seebeckVPerK;       // S, physics.md e
+        double s = seebeckVPerK;       // S
         double r = resistanceOhm;      // R
         double k = conductanceWPerK;   // K
         double tc = coldSideK;         // Tc
@@ -318,7 +321,7 @@ public final class OperatingPointSolver {
 
     /**
      * Hot-face temperature at current I with the cold face at Tc, K:
-     * Th(I) = [Tamb + Rh(½R·I² + K·Tc)]/(1 + Rh·K − Rh·S·I) (physics.md e, derived there). Valid
+     * Th(I) = [Tamb + Rh(½R·I² + K·Tc)]/(1 + Rh·K − Rh·S·I) (the hot-side balance solved for Th). Valid
      * only below the runaway current (1 + Rh·K)/(Rh·S). Arguments as {@link #currentForLoadA} plus
      * the current, A.
      */
@@ -329,7 +332,7 @@ public final class OperatingPointSolver {
                 + conductanceWPerK * coldSideK)) / d;
     }
 
-    // ---- kernel: heat-sink-coupled Qc(I) at fixed Tc and its derivatives (physics.md e) ----
+    // ---- kernel: heat-sink-coupled Qc(I) at fixed Tc and its derivatives ----
 
     static double coldHeatW(double s, double r, double k, double tc, double tamb, double rh, double i) {
         double th = hotSideK(s, r, k, tc, tamb, rh, i);
@@ -358,7 +361,7 @@ public final class OperatingPointSolver {
 
     /**
      * Current of the capacity peak at fixed Tc: root of the decreasing dQc/dI on
-     * [0, min(S·Tc/R, I_run)] (dQc/dI &lt; S·Tc − R·I, physics.md e), Newton with the analytic
+     * [0, min(S·Tc/R, I_run)] (dQc/dI = S·Tc − R·I − K·Th' &lt; S·Tc − R·I), Newton with the analytic
      * second derivative, kept inside the shrinking bracket by bisection. 0 when dQc/dI(0) ≤ 0.
      */
     static double peakCurrentA(double s, double r, double k, double tc, double tamb, double rh, double guessA) {
@@ -592,7 +595,7 @@ public final class OperatingPointSolver {
         return rh > 0 ? (1 + Math.sqrt(1 + 4 * rh * k)) / (2 * rh * s) : Double.POSITIVE_INFINITY;
     }
 
-    /** {Tc, Th} from the fixed-current 2x2 system by Cramer's rule (physics.md e.2). */
+    /** {Tc, Th} from the fixed-current 2x2 system by Cramer's rule. */
     private static double[] fixedCurrentJunctionsK(double s, double r, double k, CoolingCase c, double i, double det) {
         double rh = c.hotPathKPerW();
         double a11 = s * i + k;

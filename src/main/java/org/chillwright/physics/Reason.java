@@ -1,6 +1,6 @@
 package org.chillwright.physics;
 
-/** Why no operating point exists (physics.md e, "No-solution conditions", and h). */
+/** Why no operating point exists: a result the solvers return with a sentence, not an exception. */
 public enum Reason {
     /** The load is above the most the module pumps at the required cold face with this heat sink (e.1). */
     LOAD_ABOVE_CAPACITY,

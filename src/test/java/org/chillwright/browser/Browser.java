@@ -14,7 +14,7 @@ import org.openqa.selenium.support.ui.WebDriverWait;
 
 /**
  * Headless Debian Chromium driven by Debian's chromedriver, given explicitly so that Selenium
- * Manager never tries the network (stack.md). Each browser gets a fresh profile directory.
+ * Manager never tries the network. Each browser gets a fresh profile directory.
  */
 public final class Browser implements AutoCloseable {
 

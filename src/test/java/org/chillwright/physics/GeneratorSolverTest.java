@@ -15,14 +15,14 @@ class GeneratorSolverTest {
 
     @Test
     void idealExchangersMatchTheLoadToTheModule() {
-        // Source: matched load RL = R, physics.md i (Ioffe 1957, from memory).
+        // Source: matched load RL = R (Ioffe 1957; Rowe, CRC Handbook 1995, from memory).
         assertThat(solver.maxPower(TM_A, GeneratorCase.atJunctions(373.15, 303.15)).loadOhm())
                 .isCloseTo(2.4, within(1e-5));
     }
 
     @Test
     void idealExchangersSolveEveryLoadOfAnArray() {
-        // Source: I = Voc/(R + RL), physics.md i (Ioffe 1957, from memory). Four TM-A in series (S 0.16 V/K,
+        // Source: I = Voc/(R + RL) (Ioffe 1957; Rowe, CRC Handbook 1995, from memory). Four TM-A in series (S 0.16 V/K,
         // R 9.6 Ω) on a 9.808 Ω load once failed to bracket: the bracket end is the root itself.
         var array = TM_A.inArray(4, 1);
         double loadOhm = 9.80817245099401;
@@ -32,14 +32,14 @@ class GeneratorSolverTest {
 
     @Test
     void exchangerResistancesRaiseTheMaxPowerLoad() {
-        // Source: thermal matching moves the optimum away from RL = R (physics.md i; Yazawa & Shakouri,
+        // Source: thermal matching moves the optimum away from RL = R (Yazawa & Shakouri,
         // J. Appl. Phys. 111, 2012, from memory). Each half of the heat path drops part of the ΔT.
         assertThat(solver.maxPower(TM_A, WITH_EXCHANGERS).loadOhm()).isGreaterThan(2.4);
     }
 
     @Test
     void heatInIsPowerPlusHeatOut() {
-        // Source: first law, Qc,out = Qh,in - P, physics.md i.
+        // Source: first law, Qc,out = Qh,in - P (Ioffe 1957; Rowe, CRC Handbook 1995, from memory).
         GeneratorPoint p = solver.atLoad(TM_A, WITH_EXCHANGERS, 3);
         double heatOutW = TM_A.seebeckVPerK() * p.currentA() * p.coldJunctionK()
                 + 0.5 * p.currentA() * p.currentA() * 2.4 + 0.25 * (p.hotJunctionK() - p.coldJunctionK());
@@ -48,7 +48,7 @@ class GeneratorSolverTest {
 
     @Test
     void junctionsSitOnTheExchangerLines() {
-        // Source: Th = Tsrc - Rh·Qh,in and Tc = Tsnk + Rc·Qc,out, physics.md i.
+        // Source: Th = Tsrc - Rh·Qh,in and Tc = Tsnk + Rc·Qc,out (Ioffe 1957; Rowe, CRC Handbook 1995, from memory).
         GeneratorPoint p = solver.atLoad(TM_A, WITH_EXCHANGERS, 3);
         assertThat(p.hotJunctionK()).isCloseTo(400 - 0.5 * p.heatInW(), within(1e-9));
         assertThat(p.coldJunctionK()).isCloseTo(300 + 0.5 * p.heatOutW(), within(1e-9));

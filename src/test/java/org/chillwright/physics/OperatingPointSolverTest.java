@@ -12,7 +12,7 @@ import org.junit.jupiter.params.provider.MethodSource;
 
 class OperatingPointSolverTest {
 
-    /** Synthetic module TM-A of check-cases.json. */
+    /** Synthetic module TM-A of the check cases. */
     private static final ModuleParameters TM_A = new ModuleParameters(0.04, 2.4, 0.25);
     /** The set-up of check case S10: 10 W at 278.15 K, ambient 298.15 K, sink 0.3, cold 0.1, hot 0.05 K/W. */
     private static final CoolingCase S10 = new CoolingCase(278.15, 298.15, 10, 0.3, 0.1, 0.05);
@@ -31,7 +31,7 @@ class OperatingPointSolverTest {
 
     @Test
     void needsNoCurrentWhenConductionCarriesTheLoad() {
-        // Source: passive case, physics.md e: Qc(0) >= Qload needs no current.
+        // Source: passive case, the heat-sink network, derived from the ideal equations: Qc(0) >= Qload needs no current.
         var warmObject = new CoolingCase(310, 298.15, 1, 0.3, 0.1, 0.05);
         Solved point = solved(solver.solve(TM_A, warmObject, DriveLimits.NONE));
         assertThat(point.currentA()).isZero();
@@ -40,7 +40,7 @@ class OperatingPointSolverTest {
 
     @Test
     void returnsTheLowerRootBelowThePeak() {
-        // Source: root choice, physics.md e and pitfall 8: the lower root has the smaller current.
+        // Source: root choice, the lower-root choice of the heat-sink network: the lower root has the smaller current.
         Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
         CapacityPeak peak = OperatingPointSolver.capacityPeak(TM_A, S10.coldSideAtLoadK(), S10.ambientK(),
                 S10.hotPathKPerW());
@@ -51,7 +51,7 @@ class OperatingPointSolverTest {
 
     @Test
     void satisfiesTheHotSideNetwork() {
-        // Source: thermal network Th = Tamb + Qh·Rh, physics.md e.
+        // Source: thermal network Th = Tamb + Qh·Rh, the heat-sink network, derived from the ideal equations.
         Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
         assertThat(point.hotSideK()).isCloseTo(298.15 + 0.35 * point.heatRejectedW(), within(1e-9));
     }
@@ -72,7 +72,7 @@ class OperatingPointSolverTest {
 
     @Test
     void fastPathWithAnIdealSinkIsTheClosedForm() {
-        // Source: physics.md e, Rh = 0 closed form (case S09): Qc is then exactly quadratic, so the
+        // Source: the Rh = 0 closed form of the quadratic Qc(I) (case S09): Qc is then exactly quadratic, so the
         // Taylor start of the Newton iteration is already the root.
         double hotK = 298.15;
         double fastA = OperatingPointSolver.currentForLoadA(0.04, 2.4, 0.25, 277.15, hotK, 0, 10);
@@ -162,7 +162,7 @@ class OperatingPointSolverTest {
 
     @Test
     void copStaysBelowTheBestCopAtTheSameJunctions() {
-        // Source: COPmax at fixed Tc, Th, physics.md f (Ioffe 1957, from memory).
+        // Source: COPmax at fixed Tc, Th, Ioffe 1957, from memory.
         Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
         assertThat(point.cop()).isLessThanOrEqualTo(point.maxCop());
         assertThat(point.copOptimalCurrentA()).isLessThan(point.currentA());
@@ -227,7 +227,7 @@ class OperatingPointSolverTest {
 
     @Test
     void explainsRunawayAtFixedCurrent() {
-        // Source: det = K + S·I - Rh·S²·I² <= 0 has no steady state, physics.md e.2; with Rh = 10 K/W the
+        // Source: det = K + S·I - Rh·S²·I² <= 0 has no steady state, the fixed-current balance; with Rh = 10 K/W the
         // determinant vanishes at (1 + √(1 + 4·Rh·K))/(2·Rh·S) = 5.40 A (hand arithmetic).
         var weakSink = new CoolingCase(278.15, 298.15, 1, 9.95, 0.1, 0.05);
         Infeasible point = infeasible(solver.atCurrent(ModuleArray.single(TM_A), weakSink, DriveLimits.NONE, 6));
@@ -420,7 +420,7 @@ class OperatingPointSolverTest {
 
     @Test
     void splitsAnArrayIntoModuleShares() {
-        // Source: physics.md g: I per string, V per series position, heat per module.
+        // Source: circuit algebra of identical modules: I per string, V per series position, heat per module.
         var array = new ModuleArray(TM_A, 2, 3);
         var shared = new CoolingCase(278.15, 298.15, 30, 0.05, 0.02, 0.01);
         Solved point = solved(solver.solve(array, shared, DriveLimits.NONE));

@@ -12,16 +12,16 @@ import org.chillwright.physics.Units;
 import org.junit.jupiter.api.Test;
 
 /**
- * Ranking on a small catalog where the answer can be checked by hand or against the shared check cases.
- * Module A is check-cases.json's synthetic TM-A (S 0.04 V/K, R 2.4 Ω, K 0.25 W/K); B has the same legs at
- * half the area (R doubled, K halved: physics.md c scaling, half the capacity); C is a tenth of A.
+ * Ranking on a small catalog where the answer can be checked by hand or against the check cases.
+ * Module A is the check cases' synthetic TM-A (S 0.04 V/K, R 2.4 Ω, K 0.25 W/K); B has the same legs at
+ * half the area (R doubled, K halved: leg-area scaling, half the capacity); C is a tenth of A.
  */
 class RankingEngineTest {
 
     private static final long A = 1, B = 2, C = 3;
     private final RankingEngine engine = new RankingEngine();
 
-    /** check-cases.json S10: 10 W from an object at 5 °C, 25 °C ambient, sink 0.3 K/W, interfaces 0.05 / 0.1 K/W. */
+    /** check case S10: 10 W from an object at 5 °C, 25 °C ambient, sink 0.3 K/W, interfaces 0.05 / 0.1 K/W. */
     private static CoolingCase s10(double loadW) {
         return new CoolingCase(Units.kelvinFromCelsius(5), Units.kelvinFromCelsius(25), loadW, 0.3, 0.1, 0.05);
     }
@@ -42,7 +42,7 @@ class RankingEngineTest {
         var ranking = engine.rank(table(CandidateTable.PriceBook.NONE), rankingCase(s10(10), 1, Objective.COP));
         var best = ranking.candidates().get(0);
         assertThat(best.moduleId()).isEqualTo(A);
-        // check-cases.json S10 (brute-force nested root finding on the raw equations): I 1.961596365 A, COP 0.8716659285
+        // check case S10 (brute-force nested root finding on the raw equations): I 1.961596365 A, COP 0.8716659285
         assertThat(best.point().currentA()).isCloseTo(1.961596365, withinPercentage(1e-4));
         assertThat(best.point().cop()).isCloseTo(0.8716659285, withinPercentage(1e-4));
     }

@@ -39,7 +39,7 @@ class ComputationApiController {
     private final ModuleResolver modules;
     /** Hot side at which a module without ratings is restated when none is asked for, °C (common practice). */
     private static final double DEFAULT_RATING_HOT_SIDE_C = 25;
-    /** ZT is quoted at 300 K by convention (physics.md d). */
+    /** ZT is quoted at 300 K by convention (common practice, no source). */
     private static final double ZT_REFERENCE_K = 300;
     private static final int COOLDOWN_CURVE_POINTS = 60;
     /** The cool-down curve runs to five time constants (within 1 % of the final value) or the asked time. */

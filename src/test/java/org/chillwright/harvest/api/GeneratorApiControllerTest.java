@@ -23,7 +23,7 @@ import org.springframework.test.web.servlet.assertj.MvcTestResult;
 
 /**
  * Generator mode through JSON. With zero heat-exchanger resistances the junctions sit at the source and
- * sink temperatures, so check-cases.json S13 applies (Ioffe 1957; Rowe, CRC Handbook of Thermoelectrics
+ * sink temperatures, so check case S13 applies (Ioffe 1957; Rowe, CRC Handbook of Thermoelectrics
  * 1995, from memory; expected values by brute-force maximisation over the load).
  */
 @SpringBootTest(properties = HarvestTestCatalog.OWN_DATABASE)
