@@ -10,7 +10,7 @@ import org.junit.jupiter.api.Test;
 import org.springframework.data.repository.Repository;
 import org.springframework.modulith.core.ApplicationModules;
 
-/** Keeps the layout of DESIGN.md true: features do not reach into each other, physics knows nothing of the app. */
+/** Keeps the layout of DEVELOPERS.md true: features do not reach into each other, physics knows nothing of the app. */
 class ArchitectureTest {
 
     private static JavaClasses production;

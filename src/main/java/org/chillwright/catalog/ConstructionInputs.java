@@ -5,7 +5,7 @@ import org.chillwright.physics.Units;
 
 /**
  * A module described by its couples, leg geometry (mm, mm²) and leg materials (SI), as in the
- * module JSON of DESIGN.md. Wrapper types so that missing input can be named.
+ * module JSON of the HTTP contract. Wrapper types so that missing input can be named.
  *
  * @param legAreaNMm2             optional: the n-leg area when it differs from the p-leg area
  * @param contactResistivityOhmM2 optional: electrical contact resistance per leg end, 0 when absent

@@ -8,9 +8,11 @@ import jakarta.validation.constraints.Positive;
 import jakarta.validation.constraints.PositiveOrZero;
 
 /**
- * A module as a request describes it (DESIGN.md): by maximum ratings, by lumped parameters, by
+ * A module as a request describes it (the HTTP contract): by maximum ratings, by lumped parameters, by
  * construction, or by a catalog id. Exactly one of the four shapes may be given; {@link #shape()} says
  * which, and {@link ModuleResolver} turns it into physics parameters. Units are in the names (°C, mm).
+ * {@code maxOperatingC}, the module's stated maximum temperature, may come with any shape but a catalog
+ * entry, which carries its own; without it the hot-side limit is unchecked.
  */
 public record ModuleInput(
         // ratings
@@ -37,7 +39,9 @@ public record ModuleInput(
         @Positive Double conductivityNWPerMK,
         @PositiveOrZero Double contactResistivityOhmM2,
         // catalog entry
-        @Positive Long moduleId) {
+        @Positive Long moduleId,
+        // any shape but a catalog entry (which carries its own): the module's stated maximum temperature
+        @DecimalMin(value = "-273.15", inclusive = false) @DecimalMax("1500") Double maxOperatingC) {
 
     /** Which way the module is described. */
     public enum Shape { RATINGS, PARAMETERS, CONSTRUCTION, CATALOG }
@@ -45,19 +49,19 @@ public record ModuleInput(
     /** A module given by its maximum ratings (Imax/Vmax/ΔTmax method). */
     public static ModuleInput ofRatings(double imaxA, double vmaxV, Double qmaxW, double dtmaxK, double hotSideC) {
         return new ModuleInput(imaxA, vmaxV, qmaxW, dtmaxK, hotSideC, null, null, null, null, null, null, null,
-                null, null, null, null, null, null, null, null, null);
+                null, null, null, null, null, null, null, null, null, null);
     }
 
     /** A module given by its lumped parameters. */
     public static ModuleInput ofParameters(double seebeckVPerK, double resistanceOhm, double conductanceWPerK) {
         return new ModuleInput(null, null, null, null, null, null, seebeckVPerK, resistanceOhm, conductanceWPerK,
-                null, null, null, null, null, null, null, null, null, null, null, null);
+                null, null, null, null, null, null, null, null, null, null, null, null, null);
     }
 
     /** A catalog entry. */
     public static ModuleInput ofCatalog(long moduleId) {
         return new ModuleInput(null, null, null, null, null, null, null, null, null, null, null, null, null, null,
-                null, null, null, null, null, null, moduleId);
+                null, null, null, null, null, null, moduleId, null);
     }
 
     boolean hasRatings() {

@@ -35,12 +35,18 @@ public class ModuleResolver {
                 "give exactly one of: ratings (imaxA, vmaxV, dtmaxK, hotSideC), parameters (seebeckVPerK, "
                         + "resistanceOhm, conductanceWPerK), construction (couples, legAreaMm2, ...) or moduleId"));
         if (shape == ModuleInput.Shape.CATALOG) {
+            if (input.maxOperatingC() != null) {
+                throw new InvalidRequestException(field + ".maxOperatingC",
+                        "a catalog module carries its own maximum temperature; leave maxOperatingC out");
+            }
             var spec = catalog.find(input.moduleId()).orElseThrow(() -> new InvalidRequestException(
                     field + ".moduleId", "no catalog module with id " + input.moduleId()));
             return new ResolvedModule(spec.parameters(), Optional.ofNullable(spec.ratings()), spec.maxHotSideK());
         }
         try {
-            return resolve(input, shape, field);
+            var resolved = resolve(input, shape, field);
+            return input.maxOperatingC() == null ? resolved : new ResolvedModule(resolved.parameters(),
+                    resolved.ratings(), OptionalDouble.of(Units.kelvinFromCelsius(input.maxOperatingC())));
         } catch (InvalidQuantityException e) {
             throw new InvalidRequestException(field + "." + JsonFieldNames.of(e.field()), e.getMessage());
         }

@@ -1,6 +1,9 @@
 package org.chillwright.harvest;
 
+import java.util.List;
 import org.chillwright.physics.GeneratorPoint;
+import org.chillwright.physics.GeneratorRisks;
+import org.chillwright.physics.Warning;
 
 /**
  * One design, {@code seriesCount × parallelCount} identical modules on common plates, as a generator on
@@ -30,6 +33,19 @@ public record HarvestDesign(long moduleId, int seriesCount, int parallelCount, d
     /** Array cost per watt at the operating point, NaN when the price is unknown. */
     public double costPerW() {
         return arrayCost() / atMaxPower.powerW();
+    }
+
+    /**
+     * What to tell the person about this design: a hot face above the module's stated limit or a limit the
+     * module does not state, and an open-circuit voltage above the extra-low-voltage limit.
+     */
+    public List<Warning> warnings() {
+        return GeneratorRisks.of(openCircuitV, openCircuitHotJunctionK, maxHotSideK);
+    }
+
+    /** Whether one of {@link #warnings()} is of this kind. */
+    public boolean hasWarning(Warning.Code code) {
+        return warnings().stream().anyMatch(w -> w.code() == code);
     }
 
     /** The hot face would pass the module's limit (with the load disconnected, its hottest state). */

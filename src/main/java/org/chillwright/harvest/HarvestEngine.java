@@ -15,7 +15,7 @@ import org.chillwright.physics.Units;
 /**
  * Solves every module in every series × parallel split as a generator between one hot source and one cold
  * sink, each design on the load that gives it the most power (the solver's numerical optimum: with finite
- * heat-exchanger resistances it is not RL = R, physics.md i), and ranks the designs. Pure: no Spring, no
+ * heat-exchanger resistances it is not RL = R), and ranks the designs. Pure: no Spring, no
  * catalog; stateless and thread-safe.
  */
 public final class HarvestEngine {
@@ -33,19 +33,8 @@ public final class HarvestEngine {
                                 GeneratorCase c, double maxHotSideK, double unitPrice) {
         var array = module.inArray(seriesCount, parallelCount);
         return new HarvestDesign(moduleId, seriesCount, parallelCount, solver.openCircuitV(array, c),
-                solver.maxPower(array, c), solver.maxEfficiency(array, c), openCircuitHotJunctionK(array, c),
+                solver.maxPower(array, c), solver.maxEfficiency(array, c), GeneratorSolver.openCircuitHotJunctionK(array, c),
                 maxHotSideK, unitPrice);
-    }
-
-    /**
-     * Hot-face temperature with no current, K. Only conduction K·ΔT crosses the module, so the two
-     * heat-exchanger equations of physics.md i at I = 0 give ΔT = (Tsrc − Tsnk)/(1 + (Rh + Rc)K) and
-     * Th = Tsrc − Rh·K·ΔT.
-     */
-    static double openCircuitHotJunctionK(ModuleParameters module, GeneratorCase c) {
-        double k = module.conductanceWPerK();
-        double dtK = (c.hotSourceK() - c.coldSinkK()) / (1 + (c.hotResistanceKPerW() + c.coldResistanceKPerW()) * k);
-        return c.hotSourceK() - c.hotResistanceKPerW() * k * dtK;
     }
 
     /** What rules a design out, if anything: the hot-side limit first, then the converter's voltage. */

@@ -1,7 +1,7 @@
 package org.chillwright.physics;
 
 /**
- * The top of the concave curve Qc(I) of a heat-sink-coupled cooler (physics.md e, "Concavity"):
+ * The top of the concave curve Qc(I) of a heat-sink-coupled cooler (see {@link OperatingPointSolver}):
  * beyond this current more current pumps less.
  *
  * @param currentA current at the peak, A (0 when any current only lowers Qc)

@@ -1,7 +1,7 @@
 package org.chillwright.physics;
 
 /**
- * Steady point of a two-stage cascade with fixed cold- and hot-side temperatures (physics.md h).
+ * Steady point of a two-stage cascade with fixed cold- and hot-side temperatures (see {@link TwoStageCascade}).
  *
  * @param interstageK        interstage temperature Ti, K (between the cold and hot sides)
  * @param heatLoadW          heat pumped from the cold side Qc1, W

@@ -4,7 +4,7 @@ import java.util.OptionalDouble;
 
 /**
  * Cool-down of a lumped object on the cold face at constant current and fixed hot side
- * (physics.md j; lumped-capacitance method, F.P. Incropera &amp; D.P. DeWitt, Fundamentals of Heat and
+ * (lumped-capacitance method, F.P. Incropera &amp; D.P. DeWitt, Fundamentals of Heat and
  * Mass Transfer, ch. 5, valid for Biot number &lt; 0.1, from memory; case S16). The module's own heat
  * capacity is neglected. C·dT/dt = Qload + (Tamb − T)/Rleak − Qc(T) is linear in T, so
  * T(t) = T∞ + (T0 − T∞)·exp(−t/τ) with G = S·I + K + 1/Rleak, T∞ = (Qload + Tamb/Rleak + ½I²R + K·Th)/G, τ = C/G.

@@ -1,7 +1,7 @@
 package org.chillwright.physics;
 
 /**
- * A cooling requirement with its thermal path (physics.md section e, thermal network):
+ * A cooling requirement with its thermal path, resistances in series:
  * object —coldInterface— cold face | module | hot face —hotInterface— sink base —sink— ambient.
  *
  * @param objectK                 object set-point temperature, K, &gt; 0
@@ -51,7 +51,7 @@ public record CoolingCase(double objectK, double ambientK, double heatLoadW, dou
         return !Double.isNaN(relativeHumidity);
     }
 
-    /** Total hot-side resistance Rh = hot interface + heat sink, K/W (physics.md e). */
+    /** Total hot-side resistance Rh = hot interface + heat sink, K/W (resistances in series). */
     public double hotPathKPerW() {
         return hotInterfaceKPerW + sinkResistanceKPerW;
     }

@@ -2,7 +2,7 @@ package org.chillwright.physics;
 
 /**
  * {@code seriesCount × parallelCount} identical detailed modules on common isothermal plates (the
- * detailed counterpart of {@link ModuleArray}; physics.md g): each module carries the terminal
+ * detailed counterpart of {@link ModuleArray}; derived here: identical modules on common plates, as ModuleArray): each module carries the terminal
  * current / parallelCount, the voltage adds over the series count, heats add over all modules.
  *
  * @param module        one module, not null

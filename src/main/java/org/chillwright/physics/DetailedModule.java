@@ -4,7 +4,7 @@ package org.chillwright.physics;
  * A module for the detailed leg model ({@link DetailedSolver}): N couples of one p and one n leg,
  * electrically in series and thermally in parallel between the cold and the hot face, with
  * temperature-dependent materials, an electrical contact resistance and a thermal contact resistance
- * at each of the four leg ends of a couple (physics.md c and d).
+ * at each of the four leg ends of a couple (Rowe & Min, J. Power Sources 73 (1998) 193, and Goldsmid 2016, from memory).
  *
  * <p>Sources: leg geometry and contact treatment as {@link LegConstruction} (H.J. Goldsmid,
  * Introduction to Thermoelectricity, 2016; D.M. Rowe &amp; G. Min, J. Power Sources 73 (1998) 193,
@@ -72,7 +72,7 @@ public record DetailedModule(int couples, double legAreaPM2, double legAreaNM2, 
     }
 
     /**
-     * Lumped parameters with every property taken at one temperature (physics.md c and d, "Simplest:
+     * Lumped parameters with every property taken at one temperature (Goldsmid, Introduction to Thermoelectricity, 2016, ch. 3, from memory: "Simplest:
      * evaluate α, ρ, k at Tm"): S = N(αp − αn), R = N[ρp·L/Ap + ρn·L/An + 2ρc/Ap + 2ρc/An],
      * K = N[1/(L/(kp·Ap) + 2rt/Ap) + 1/(L/(kn·An) + 2rt/An)] (thermal contacts in series with each leg).
      *

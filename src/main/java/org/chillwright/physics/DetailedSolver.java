@@ -17,8 +17,8 @@ import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
  * The detailed (temperature-dependent, Thomson-including) model of a cooler or generator: 1-D
  * steady legs solved as a boundary-value problem, coupled to the same thermal network as the lumped
  * {@link OperatingPointSolver} (object —Rint,c— cold face | legs | hot face —Rint,h + Rsink— ambient,
- * physics.md e) and, in generator mode, to the heat-exchanger network of {@link GeneratorSolver}
- * (physics.md i).
+ * the heat-sink network of OperatingPointSolver) and, in generator mode, to the heat-exchanger network of {@link GeneratorSolver}
+ * (Ioffe 1957; Rowe (ed.), CRC Handbook of Thermoelectrics, 1995; as GeneratorSolver).
  *
  * <p><b>Method: finite differences, not shooting.</b> Each leg is a two-point boundary-value problem
  * (temperature given at both faces). It is solved by the energy-conserving box scheme of
@@ -127,7 +127,7 @@ public final class DetailedSolver {
         }
         CoupleModel m = cooler.model;
         double voltageV = m.voltageV;
-        Infeasible overLimit = OperatingPointSolver.limitViolation(limits, currentA, voltageV);
+        Infeasible overLimit = OperatingPointSolver.limitViolation(limits, currentA, voltageV, hotK);
         if (overLimit != null) {
             return overLimit;
         }
@@ -450,7 +450,7 @@ public final class DetailedSolver {
     // ------------------------------------------------------------------ generator
 
     /**
-     * Generator on a load with the heat-exchanger network of {@link GeneratorSolver} (physics.md i):
+     * Generator on a load with the heat-exchanger network of {@link GeneratorSolver} (Ioffe 1957; Rowe (ed.), CRC Handbook of Thermoelectrics, 1995; as GeneratorSolver):
      * Th = Tsrc − Rhx,h·Qh,in, Tc = Tsnk + Rhx,c·Qc,out, and the circuit I·RL = V(I), where the legs carry
      * the current the module drives (the cooler current reversed). For each current the two junction
      * temperatures come from a 2-D Newton; the current from Brent's method on [0, a current where the
@@ -585,7 +585,7 @@ public final class DetailedSolver {
 
     /**
      * Maximum ratings of one module in the detailed model with the hot face held at {@code hotSideK}
-     * (the rating definitions of physics.md b): ΔTmax is the largest ΔT at Qc = 0, Imax the current
+     * (the rating definitions of the ideal rating relations derived from Ioffe's equations, see RatingsMethod): ΔTmax is the largest ΔT at Qc = 0, Imax the current
      * that gives it (the peak of Qc(I) at the cold face of ΔTmax), Vmax the voltage there and Qmax the
      * cooling at Imax with ΔT = 0. With constant properties these are the ideal forward relations.
      *

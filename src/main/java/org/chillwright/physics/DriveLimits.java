@@ -27,6 +27,14 @@ public record DriveLimits(double ratedImaxA, double supplyMaxV, double supplyMax
         return new DriveLimits(ratedImaxA, Double.NaN, Double.NaN, Double.NaN);
     }
 
+    /**
+     * The hottest hot face a point may have, K: the module's stated maximum where it has one, else
+     * {@link SafetyLimits#HOT_FACE_WITHOUT_STATED_LIMIT_K} (250 °C). Beyond it a point is of no physical use.
+     */
+    public double hotFaceLimitK() {
+        return Double.isNaN(maxHotSideK) ? SafetyLimits.HOT_FACE_WITHOUT_STATED_LIMIT_K : maxHotSideK;
+    }
+
     /** Whether a rated Imax was given. */
     public boolean hasRatedImax() {
         return !Double.isNaN(ratedImaxA);

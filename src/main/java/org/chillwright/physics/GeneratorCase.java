@@ -2,7 +2,7 @@ package org.chillwright.physics;
 
 /**
  * A thermoelectric generator between a heat source and a sink through heat-exchanger resistances
- * (physics.md i): Th = Tsrc − Rhx,h·Qh,in and Tc = Tsnk + Rhx,c·Qc,out.
+ * (node balances, see {@link GeneratorSolver}): Th = Tsrc − Rhx,h·Qh,in and Tc = Tsnk + Rhx,c·Qc,out.
  *
  * @param hotSourceK          source temperature, K, &gt; coldSinkK
  * @param coldSinkK           sink temperature, K, &gt; 0

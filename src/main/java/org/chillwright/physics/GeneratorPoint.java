@@ -1,7 +1,7 @@
 package org.chillwright.physics;
 
 /**
- * Steady point of a thermoelectric generator on an electrical load (physics.md i).
+ * Steady point of a thermoelectric generator on an electrical load (ideal equations, see {@link GeneratorSolver}).
  *
  * @param loadOhm       external load RL, Ω
  * @param currentA      current through the load, A

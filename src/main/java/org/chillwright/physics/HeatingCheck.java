@@ -7,8 +7,8 @@ import org.apache.commons.math3.exception.NoBracketingException;
 /**
  * The same cooler run backwards on the coldest day: with the current reversed, the object-side face is
  * the hot junction and the heat-sink side the cold one, so the module pumps heat from the (cold) ambient
- * into the object on top of its Joule heat. Same ideal equations as cooling (physics.md a), with the
- * roles of the faces swapped; the network is the one of physics.md e:
+ * into the object on top of its Joule heat. Same ideal equations as cooling (Ioffe 1957; Goldsmid 2016, from
+ * memory), with the roles of the faces swapped; the network is the one of {@link OperatingPointSolver}:
  * <pre>
  *   object-side face  Th = Tobj + Qh·Rint,c              (heat flows from the face into the object)
  *   sink-side face    Tc = Tamb − Qc·(Rint,h + Rsink)      (heat drawn from the sink cools it)

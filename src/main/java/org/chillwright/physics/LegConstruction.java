@@ -2,7 +2,8 @@ package org.chillwright.physics;
 
 /**
  * A module described by its construction: N couples of one p-type and one n-type leg,
- * electrically in series and thermally in parallel (physics.md section c).
+ * electrically in series and thermally in parallel (H.J. Goldsmid, Introduction to Thermoelectricity, 2016,
+ * from memory).
  *
  * <p>Source: the standard leg-geometry relations S = N(αp − αn), R = N[ρp·L/Ap + ρn·L/An + contacts],
  * K = N(kp·Ap + kn·An)/L (H.J. Goldsmid, Introduction to Thermoelectricity, 2016, device chapter,
@@ -59,7 +60,7 @@ public record LegConstruction(int couples, double legAreaPM2, double legAreaNM2,
     }
 
     /**
-     * Lumped parameters (physics.md c, case S01): S = N(αp − αn);
+     * Lumped parameters (Goldsmid 2016, from memory; case S01): S = N(αp − αn);
      * R = N[ρp·L/Ap + ρn·L/An + 2ρc/Ap + 2ρc/An] (two contacts per leg); K = N(kp·Ap/L + kn·An/L).
      * Each leg uses its own A/L.
      */
@@ -75,7 +76,7 @@ public record LegConstruction(int couples, double legAreaPM2, double legAreaNM2,
     }
 
     /**
-     * Dimensionless figure of merit of one material, Z·T = α²T/(ρ·k) (physics.md d; Goldsmid 2016,
+     * Dimensionless figure of merit of one material, Z·T = α²T/(ρ·k) (Goldsmid 2016,
      * from memory; case S18).
      *
      * @param seebeckVPerK         α, V/K, finite

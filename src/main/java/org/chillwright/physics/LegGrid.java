@@ -5,7 +5,7 @@ package org.chillwright.physics;
  * finite-difference core of {@link DetailedSolver}. Mutable working storage, one per solve: not
  * thread-safe. The last converged profile is the start of the next solve (warm start).
  *
- * <p>Equations (1-D steady, physics.md d; the classical formulation in heat flux q and temperature,
+ * <p>Equations (1-D steady, Goldsmid 2016; Rowe (ed.), CRC Handbook of Thermoelectrics, 1995, from memory; the classical formulation in heat flux q and temperature,
  * e.g. H.S. Lee, Thermoelectrics: Design and Materials, Wiley 2016, ch. 5, from memory): with the
  * current density J signed along x (J = +I/A in a p leg, −I/A in an n leg, so that J·α &gt; 0 in both),
  * <pre>

@@ -30,7 +30,7 @@ public record LegMaterial(PropertyCurve seebeckVPerK, PropertyCurve resistivityO
                 conductivityWPerMK.scaled(conductivityFactor));
     }
 
-    /** Thomson coefficient τ = T·dα/dT, V/K (Kelvin's second relation; physics.md d). */
+    /** Thomson coefficient τ = T·dα/dT, V/K (Kelvin's second relation; Goldsmid 2016, from memory). */
     public double thomsonVPerK(double temperatureK) {
         return temperatureK * seebeckVPerK.slopeAt(temperatureK);
     }

@@ -33,8 +33,9 @@ public record MaterialSet(String name, String source, LegMaterial p, LegMaterial
      * research code that cites both papers; the papers themselves were not re-read here, and neither
      * was the temperature range of the data behind the fit (so no validity range is quoted from them). At 300 K
      * they give α = 212 µV/K, ρ = 1.11e-5 Ω·m, k = 1.65 W/(m·K), ZT = 0.74, in line with the typical
-     * Bi2Te3 values of physics.md d. The set is offered for 200 K to 400 K, where α, ρ and k stay
-     * physical (checked by the constructor); outside it the detailed result says so.
+     * Bi2Te3 values (H.J. Goldsmid, Introduction to Thermoelectricity, 2016; D.M. Rowe (ed.), CRC
+     * Handbook of Thermoelectrics, 1995; from memory). The set is offered for 200 K to 400 K, where α, ρ
+     * and k stay physical (checked by the constructor); outside it the detailed result says so.
      */
     public static final MaterialSet BI2TE3_COUPLE_AVERAGE = symmetric("Bi2Te3 alloy, couple average (polynomial fit)",
             "B.J. Huang, C.J. Chin, C.L. Duang, A design method of thermoelectric cooler, Int. J. Refrigeration"

@@ -3,8 +3,8 @@ package org.chillwright.physics;
 import java.util.OptionalDouble;
 
 /**
- * Maximum ratings of a module at a stated hot-side temperature, as in a catalogue (physics.md b,
- * "Rating definitions"): ΔTmax is the largest ΔT at Qc = 0, Imax the current giving it, Vmax the
+ * Maximum ratings of a module at a stated hot-side temperature, as in a catalogue (the ideal-model
+ * definitions): ΔTmax is the largest ΔT at Qc = 0, Imax the current giving it, Vmax the
  * voltage there and Qmax the cooling at Imax and ΔT = 0.
  *
  * @param imaxA    Imax, A, finite and &gt; 0
@@ -41,7 +41,8 @@ public record MaxRatings(double imaxA, double vmaxV, double qmaxW, double dtmaxK
 
     /**
      * Qmax implied by the other three ratings in the ideal model, W:
-     * Qmax = Imax·Vmax(Th + ΔTmax)/(2Th) (physics.md b, consistency relation, derived there).
+     * Qmax = Imax·Vmax(Th + ΔTmax)/(2Th) (consistency of the four ideal ratings, derived here from the ideal
+     * equations: Vmax = S·Th and Qmax = S·Imax(Th + ΔTmax)/2).
      */
     public double impliedQmaxW() {
         return imaxA * vmaxV * (hotSideK + dtmaxK) / (2 * hotSideK);
@@ -57,7 +58,7 @@ public record MaxRatings(double imaxA, double vmaxV, double qmaxW, double dtmaxK
 
     /**
      * Ratings of {@code seriesCount × parallelCount} identical modules on common plates:
-     * Imax·np, Vmax·ns, Qmax·ns·np, ΔTmax unchanged (physics.md g).
+     * Imax·np, Vmax·ns, Qmax·ns·np, ΔTmax unchanged (circuit algebra of identical modules, derived here).
      */
     public MaxRatings inArray(int seriesCount, int parallelCount) {
         Check.atLeastOne("seriesCount", seriesCount);

@@ -2,7 +2,7 @@ package org.chillwright.physics;
 
 /**
  * {@code seriesCount × parallelCount} identical modules sharing isothermal cold and hot plates
- * (physics.md g; circuit algebra of identical modules, derived there; case S14).
+ * (circuit algebra of identical modules on common plates, derived here; case S14).
  *
  * @param module        parameters of one module
  * @param seriesCount   modules in series per string, ≥ 1

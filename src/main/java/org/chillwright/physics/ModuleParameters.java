@@ -9,7 +9,7 @@ import java.util.OptionalDouble;
  * <p>Source of every equation here, unless a method says otherwise: A.F. Ioffe, Semiconductor
  * Thermoelements and Thermoelectric Cooling, 1957; H.J. Goldsmid, Introduction to
  * Thermoelectricity, 2016 (both from memory); the same per-couple form in A.V. da Rosa,
- * Fundamentals of Renewable Energy Processes, ch. 5 (physics.md section a).
+ * Fundamentals of Renewable Energy Processes, ch. 5.
  *
  * @param seebeckVPerK     module Seebeck coefficient S = N(αp − αn), V/K, finite and &gt; 0
  * @param resistanceOhm    module electrical resistance R (legs and contacts), Ω, finite and &gt; 0
@@ -24,8 +24,11 @@ public record ModuleParameters(double seebeckVPerK, double resistanceOhm, double
     }
 
     /**
-     * Parameters from maximum ratings (physics.md b, inverse relations). With Tc,dt = Th − ΔTmax:
-     * R = S·Tc,dt/Imax and K = S·Imax·Tc,dt/(2ΔTmax); S depends on the method.
+     * Parameters from maximum ratings, the ideal equations inverted (derived here; published forms in
+     * {@link RatingsMethod}). ΔTmax is reached at Qc = 0 with I = Imax = S·Tc,dt/R, Tc,dt = Th − ΔTmax, which
+     * gives R = S·Tc,dt/Imax and K = S·Imax·Tc,dt/(2ΔTmax); S depends on the method: Vmax/Th, or
+     * 2Qmax/(Imax(Th + ΔTmax)), which assumes Qmax was measured at Imax with ΔT = 0 (see
+     * {@link RatingsMethod#QMAX_IMAX_DTMAX} for the derivation and what a Qmax measured otherwise does).
      *
      * @param ratings maximum ratings at their hot-side temperature
      * @param method  which three ratings to use; {@link RatingsMethod#QMAX_IMAX_DTMAX} needs Qmax
@@ -51,13 +54,13 @@ public record ModuleParameters(double seebeckVPerK, double resistanceOhm, double
         return new ModuleParameters(s, r, k);
     }
 
-    /** Figure of merit Z = S²/(R·K), 1/K (physics.md section 0). */
+    /** Figure of merit Z = S²/(R·K), 1/K (Ioffe 1957, from memory). */
     public double figureOfMeritPerK() {
         return seebeckVPerK * seebeckVPerK / (resistanceOhm * conductanceWPerK);
     }
 
     /**
-     * Heat absorbed at the cold face, W: Qc = S·I·Tc − ½I²R − K(Th − Tc) (physics.md a).
+     * Heat absorbed at the cold face, W: Qc = S·I·Tc − ½I²R − K(Th − Tc) (Ioffe 1957; Goldsmid 2016).
      *
      * @param currentA  drive current, A (positive pumps heat from the cold to the hot face)
      * @param coldSideK cold junction temperature Tc, K, &gt; 0
@@ -71,7 +74,7 @@ public record ModuleParameters(double seebeckVPerK, double resistanceOhm, double
     }
 
     /**
-     * Heat released at the hot face, W: Qh = S·I·Th + ½I²R − K(Th − Tc) (physics.md a).
+     * Heat released at the hot face, W: Qh = S·I·Th + ½I²R − K(Th − Tc) (Ioffe 1957; Goldsmid 2016).
      * Arguments as {@link #coldSideHeatW}.
      */
     public double hotSideHeatW(double currentA, double coldSideK, double hotSideK) {
@@ -81,19 +84,19 @@ public record ModuleParameters(double seebeckVPerK, double resistanceOhm, double
         return peltierW + jouleW - conductionW;
     }
 
-    /** Terminal voltage, V: V = S(Th − Tc) + I·R (physics.md a). Arguments as {@link #coldSideHeatW}. */
+    /** Terminal voltage, V: V = S(Th − Tc) + I·R (Ioffe 1957). Arguments as {@link #coldSideHeatW}. */
     public double voltageV(double currentA, double coldSideK, double hotSideK) {
         return seebeckVPerK * (hotSideK - coldSideK) + currentA * resistanceOhm;
     }
 
-    /** Electrical input power, W: P = I·V = Qh − Qc (physics.md a). Arguments as {@link #coldSideHeatW}. */
+    /** Electrical input power, W: P = I·V = Qh − Qc (first law). Arguments as {@link #coldSideHeatW}. */
     public double powerW(double currentA, double coldSideK, double hotSideK) {
         return currentA * voltageV(currentA, coldSideK, hotSideK);
     }
 
     /**
      * Lower (low-power) current that pumps {@code heatLoadW} between fixed junction temperatures
-     * (ideal heat sink), A: I = [S·Tc − √(S²Tc² − 2R(Qc + KΔT))]/R (physics.md e, case S09), written
+     * (ideal heat sink), A: I = [S·Tc − √(S²Tc² − 2R(Qc + KΔT))]/R (the quadratic Qc(I) solved, case S09), written
      * in the cancellation-free form 2(Qc + KΔT)/(S·Tc + √…). Empty when the load exceeds
      * S²Tc²/(2R) − KΔT.
      *
@@ -117,13 +120,13 @@ public record ModuleParameters(double seebeckVPerK, double resistanceOhm, double
         return OptionalDouble.of(2 * needW / (peltierPerA + Math.sqrt(discriminant)));
     }
 
-    /** Current of largest cooling at fixed junction temperatures, A: I = S·Tc/R (physics.md f). */
+    /** Current of largest cooling at fixed junction temperatures, A: I = S·Tc/R (Ioffe 1957; Goldsmid 2016). */
     public double maxCoolingCurrentA(double coldSideK) {
         return seebeckVPerK * coldSideK / resistanceOhm;
     }
 
     /**
-     * Largest cooling at fixed junction temperatures, W: S²Tc²/(2R) − K(Th − Tc) (physics.md f).
+     * Largest cooling at fixed junction temperatures, W: S²Tc²/(2R) − K(Th − Tc) (Ioffe 1957; Goldsmid 2016).
      */
     public double maxColdSideHeatW(double coldSideK, double hotSideK) {
         return coldSideHeatW(maxCoolingCurrentA(coldSideK), coldSideK, hotSideK);
@@ -131,7 +134,7 @@ public record ModuleParameters(double seebeckVPerK, double resistanceOhm, double
 
     /**
      * Current of best COP at fixed junction temperatures, A: I = S·ΔT/(R(M − 1)) with
-     * M = √(1 + Z·Tm) (physics.md f; Ioffe 1957, from memory). 0 when ΔT ≤ 0 (the best COP is then
+     * M = √(1 + Z·Tm) (Ioffe 1957, from memory). 0 when ΔT ≤ 0 (the best COP is then
      * approached as the current goes to zero).
      */
     public double copOptimalCurrentA(double coldSideK, double hotSideK) {
@@ -143,14 +146,14 @@ public record ModuleParameters(double seebeckVPerK, double resistanceOhm, double
         return seebeckVPerK * dtK / (resistanceOhm * (m - 1));
     }
 
-    /** Best COP at fixed junction temperatures (physics.md f); see {@link #maxCop(double, double, double)}. */
+    /** Best COP at fixed junction temperatures (Ioffe 1957); see {@link #maxCop(double, double, double)}. */
     public double maxCop(double coldSideK, double hotSideK) {
         return maxCop(figureOfMeritPerK(), coldSideK, hotSideK);
     }
 
     /**
      * Best cooling COP between fixed junction temperatures: COPmax = (Tc/ΔT)(M − Th/Tc)/(M + 1),
-     * M = √(1 + Z·Tm) (physics.md f; Ioffe 1957, Goldsmid 2016, from memory; cases S07, S08).
+     * M = √(1 + Z·Tm) (Ioffe 1957, Goldsmid 2016, from memory; cases S07, S08).
      * Negative when M &lt; Th/Tc (ΔT beyond reach); +∞ when ΔT ≤ 0.
      *
      * @param figureOfMeritPerK Z, 1/K, &gt; 0
@@ -174,7 +177,8 @@ public record ModuleParameters(double seebeckVPerK, double resistanceOhm, double
 
     /**
      * Equivalent module of {@code seriesCount × parallelCount} identical modules on common
-     * isothermal plates: S·ns, R·ns/np, K·ns·np; Z is unchanged (physics.md g, case S14).
+     * isothermal plates: S·ns, R·ns/np, K·ns·np; Z is unchanged (circuit algebra of identical modules,
+     * derived here; case S14).
      *
      * @param seriesCount   modules in series per string, ≥ 1
      * @param parallelCount parallel strings, ≥ 1
@@ -189,7 +193,7 @@ public record ModuleParameters(double seebeckVPerK, double resistanceOhm, double
 
     /**
      * Ideal ΔTmax at a hot-side temperature, K: Th − Tc,min with Tc,min = 2Th/(√(1 + 2Z·Th) + 1), the
-     * root of Z·Tc²/2 + Tc − Th = 0 in its cancellation-free form (physics.md b, forward relations).
+     * root of Z·Tc²/2 + Tc − Th = 0 in its cancellation-free form (ΔTmax at Qc = 0 and I = S·Tc/R, derived here).
      *
      * @param hotSideK hot-side temperature Th, K, &gt; 0 (not checked: used on hot paths)
      */
@@ -198,8 +202,8 @@ public record ModuleParameters(double seebeckVPerK, double resistanceOhm, double
     }
 
     /**
-     * Ideal maximum ratings at a hot-side temperature, constant properties (physics.md b, forward
-     * relations; derived there and checked by brute force, case S02):
+     * Ideal maximum ratings at a hot-side temperature, constant properties (derived here from the ideal
+     * equations and checked by brute-force maximisation, case S02):
      * Tc,min = 2Th/(√(1 + 2Z·Th) + 1), ΔTmax = Th − Tc,min, Imax = S·Tc,min/R, Vmax = S·Th,
      * Qmax = S·Imax(Th + ΔTmax)/2.
      *

@@ -1,7 +1,7 @@
 package org.chillwright.physics;
 
 /**
- * What one module of an array carries (physics.md g): identical modules on common plates share
+ * What one module of an array carries (circuit algebra, derived here): identical modules on common plates share
  * current per string, voltage per series position and heat equally.
  *
  * @param currentA       current through one module, A

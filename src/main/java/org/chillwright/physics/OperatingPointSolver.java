@@ -10,11 +10,13 @@ import org.apache.commons.math3.exception.MathIllegalStateException;
 import org.apache.commons.math3.exception.NoBracketingException;
 
 /**
- * Steady operating point of a heat-sink-coupled cooler (physics.md e): the current that removes a
- * load at a required object temperature (e.1), or the object temperature reached at a fixed
- * current (e.2) or voltage (e.3). Ideal constant-property equations (physics.md a) with the
- * thermal network Tc = Tobj − Q·Rint,c and Th = Tamb + Qh·Rh, Rh = Rint,h + Rsink (physics.md e,
- * derived there; cases S10, S10b, S11, S12).
+ * Steady operating point of a heat-sink-coupled cooler: the current that removes a load at a required
+ * object temperature, or the object temperature reached at a fixed current or voltage. Ideal
+ * constant-property equations Qc = S·I·Tc − ½I²R − K(Th − Tc), Qh = Qc + I·V, V = S(Th − Tc) + I·R
+ * (A.F. Ioffe, Semiconductor Thermoelements and Thermoelectric Cooling, 1957; H.J. Goldsmid, Introduction
+ * to Thermoelectricity, 2016; both from memory) with the series thermal network Tc = Tobj − Q·Rint,c and
+ * Th = Tamb + Qh·Rh, Rh = Rint,h + Rsink; the closed forms and bounds below are derived here from those
+ * equations and checked against brute-force scans in the tests (check cases S10, S10b, S11, S12).
  *
  * <p>Stateless and thread-safe. The static {@link #currentForLoadA} and {@link #copAtLoad} are the
  * allocation-free path for ranking many candidates; {@link #solve} adds the capacity, margins,
@@ -25,7 +27,7 @@ public final class OperatingPointSolver {
     /**
      * Newton stops once a step in current is below this, A. The iterations converge quadratically,
      * so the error left after a 1e-9 A step is many orders smaller, well inside the 1e-9 relative
-     * accuracy physics.md asks for at currents of 0.1 A and up.
+     * accuracy the check cases ask for at currents of 0.1 A and up.
      */
     static final double CURRENT_ACCURACY_A = 1e-9;
     /**
@@ -54,14 +56,15 @@ public final class OperatingPointSolver {
     /** Fraction of the runaway current used as the end of a bracket: at the runaway current itself Th is infinite. */
     private static final double RUNAWAY_GUARD = 1 - 1e-9;
 
-    /** Warn above this fraction of rated Imax: common practice (no source), physics.md l. */
+    /** Warn above this fraction of rated Imax: common practice (no source). */
     static final double NEAR_IMAX_FRACTION = 0.8;
-    /** Warn above this fraction of ΔTmax at the solved hot side: common practice (no source), physics.md l. */
+    /** Warn above this fraction of ΔTmax at the solved hot side: common practice (no source). */
     static final double NEAR_DTMAX_FRACTION = 0.7;
-    /** Warn when the cold face is less than this above the dew point, K: common practice (no source), physics.md k. */
+    /** Warn when the cold face is less than this above the dew point, K: common practice (no source). */
     static final double DEW_POINT_MARGIN_K = 2.0;
 
     private static final DewPoint DEW_POINT = new DewPointMagnus();
+    private static final double FREEZING_K = Units.kelvinFromCelsius(0);
 
     /**
      * Lower-root current that removes the case's load at its object temperature, single module.
@@ -72,7 +75,7 @@ public final class OperatingPointSolver {
     }
 
     /**
-     * Current that removes {@code heatLoadW} from the object held at {@code objectK} (physics.md e.1).
+     * Current that removes {@code heatLoadW} from the object held at {@code objectK}.
      * Returns the lower root of Qc(I) = Qload (low current, low power, high COP; the upper root is
      * on the over-driven side and never returned), I = 0 when conduction alone carries the load
      * (passive case), or {@link Infeasible} with {@link Reason#DELTA_T_BEYOND_REACH},
@@ -84,6 +87,10 @@ public final class OperatingPointSolver {
      * @param limits      rated Imax of the array, supply limits, hot-side limit (any may be absent)
      */
     public OperatingPoint solve(ModuleArray array, CoolingCase coolingCase, DriveLimits limits) {
+        return withCapacity(solvePoint(array, coolingCase, limits), array.equivalent(), coolingCase);
+    }
+
+    private static OperatingPoint solvePoint(ModuleArray array, CoolingCase coolingCase, DriveLimits limits) {
         ModuleParameters module = array.equivalent();
         double s = module.seebeckVPerK();
         double r = module.resistanceOhm();
@@ -104,15 +111,16 @@ public final class OperatingPointSolver {
         }
         double hotK = hotSideK(s, r, k, coldK, ambientK, rh, currentA);
         double voltageV = module.voltageV(currentA, coldK, hotK);
-        Infeasible overLimit = limitViolation(limits, currentA, voltageV);
+        Infeasible overLimit = limitViolation(limits, currentA, voltageV, hotK);
         if (overLimit != null) {
             return overLimit;
         }
-        return complete(array, module, coolingCase, limits, currentA, voltageV, coldK, hotK, coolingCase.objectK());
+        return complete(array, module, coolingCase, limits, currentA, voltageV, coldK, hotK, coolingCase.objectK(),
+                false);
     }
 
     /**
-     * Object temperature reached at a fixed terminal current with the case's load (physics.md e.2,
+     * Object temperature reached at a fixed terminal current with the case's load (derived here; check
      * case S12): the linear 2x2 system
      * (S·I + K)Tc − K·Th = Q + ½RI², −Rh·K·Tc + (1 + Rh·K − Rh·S·I)Th = Tamb + ½Rh·R·I², by Cramer's
      * rule; Tobj = Tc + Rint,c·Q. Its determinant is K + S·I − Rh·S²·I²; at or below zero there is no
@@ -122,6 +130,11 @@ public final class OperatingPointSolver {
      */
     public OperatingPoint atCurrent(ModuleArray array, CoolingCase coolingCase, DriveLimits limits, double currentA) {
         Check.nonNegative("currentA", currentA);
+        return withCapacity(atCurrentPoint(array, coolingCase, limits, currentA), array.equivalent(), coolingCase);
+    }
+
+    private static OperatingPoint atCurrentPoint(ModuleArray array, CoolingCase coolingCase, DriveLimits limits,
+                                                 double currentA) {
         ModuleParameters module = array.equivalent();
         double s = module.seebeckVPerK();
         double r = module.resistanceOhm();
@@ -138,16 +151,16 @@ public final class OperatingPointSolver {
         double coldK = junctionK[0];
         double hotK = junctionK[1];
         double voltageV = module.voltageV(currentA, coldK, hotK);
-        Infeasible overLimit = limitViolation(limits, currentA, voltageV);
+        Infeasible overLimit = limitViolation(limits, currentA, voltageV, hotK);
         if (overLimit != null) {
             return overLimit;
         }
         double objectK = coldK + coolingCase.coldInterfaceKPerW() * coolingCase.heatLoadW();
-        return complete(array, module, coolingCase, limits, currentA, voltageV, coldK, hotK, objectK);
+        return complete(array, module, coolingCase, limits, currentA, voltageV, coldK, hotK, objectK, true);
     }
 
     /**
-     * Object temperature reached at a fixed terminal voltage with the case's load (physics.md e.3):
+     * Object temperature reached at a fixed terminal voltage with the case's load:
      * a 1-D root in I of S(Th − Tc) + I·R = V with (Tc, Th) from the fixed-current system, found by
      * Brent's method on a bracket from 0 (where the voltage is at most 0) to a current where it
      * exceeds V. The case's {@code objectK} is not used.
@@ -170,9 +183,9 @@ public final class OperatingPointSolver {
         double highA = Math.min(voltageV / r, runawayA * RUNAWAY_GUARD);
         for (int doubling = 0; surplusV.applyAsDouble(highA) < 0; doubling++) {
             if (doubling == 64 || highA >= runawayA * RUNAWAY_GUARD) {
-                return new Infeasible(Reason.HEAT_SINK_RUNAWAY, format(
+                return withCapacity(new Infeasible(Reason.HEAT_SINK_RUNAWAY, format(
                         "no steady state reaches %.2f V: the hot side runs away from %.2f A before the voltage"
-                                + " is reached", voltageV, runawayA));
+                                + " is reached", voltageV, runawayA)), module, coolingCase);
             }
             highA = Math.min(2 * highA, runawayA * RUNAWAY_GUARD);
         }
@@ -188,8 +201,8 @@ public final class OperatingPointSolver {
     }
 
     /**
-     * Peak of the heat-sink-coupled Qc(I) at a fixed cold face (physics.md e, "Concavity"; cases S10b,
-     * S11): the root of dQc/dI = 0 on [0, min(S·Tc/R, I_run)].
+     * Peak of the heat-sink-coupled Qc(I) at a fixed cold face (Qc is concave in I, see
+     * {@link #currentForLoadA}; cases S10b, S11): the root of dQc/dI = 0 on [0, min(S·Tc/R, I_run)].
      *
      * @param module       module (or array equivalent) parameters
      * @param coldSideK    cold-face temperature Tc, K, &gt; 0
@@ -219,8 +232,9 @@ public final class OperatingPointSolver {
      * with α = Th·d at the runaway current, α ≥ 0; so Th‴ = 6α(Rh·S)³/d⁴ ≥ 0 and Qc‴ = −K·Th‴ ≤ 0.
      * Qc″ therefore only falls as I grows, the Taylor polynomial lies on or above Qc for I ≥ 0, and
      * its root is at or left of the lower root. With an ideal sink (Rh = 0) Qc is exactly that
-     * quadratic and the start is the closed form of physics.md e (case S09), which the first step only
-     * confirms. Qc(I) is concave on [0, I_run) (physics.md e), so every tangent lies above the curve:
+     * quadratic and the start is the closed form of {@link ModuleParameters#currentForLoadA} (case S09),
+     * which the first step only confirms. Qc(I) is concave on [0, I_run) (Th(I) is convex there), so every
+     * tangent lies above the curve:
      * from a point left of the lower root each Newton step lands at or left of that root, and the
      * iterates rise monotonically to it, never reaching the upper root. If the slope becomes ≤ 0 (or
      * the step passes the runaway current) before the load is reached, the iterates have passed the
@@ -236,7 +250,7 @@ public final class OperatingPointSolver {
      */
     public static double currentForLoadA(double seebeckVPerK, double resistanceOhm, double conductanceWPerK,
                                          double coldSideK, double ambientK, double hotPathKPerW, double heatLoadW) {
-        double s = seebeckVPerK;       // S, physics.md e
+        double s = seebeckVPerK;       // S
         double r = resistanceOhm;      // R
         double k = conductanceWPerK;   // K
         double tc = coldSideK;         // Tc
@@ -307,7 +321,7 @@ public final class OperatingPointSolver {
 
     /**
      * Hot-face temperature at current I with the cold face at Tc, K:
-     * Th(I) = [Tamb + Rh(½R·I² + K·Tc)]/(1 + Rh·K − Rh·S·I) (physics.md e, derived there). Valid
+     * Th(I) = [Tamb + Rh(½R·I² + K·Tc)]/(1 + Rh·K − Rh·S·I) (the hot-side balance solved for Th). Valid
      * only below the runaway current (1 + Rh·K)/(Rh·S). Arguments as {@link #currentForLoadA} plus
      * the current, A.
      */
@@ -318,7 +332,7 @@ public final class OperatingPointSolver {
                 + conductanceWPerK * coldSideK)) / d;
     }
 
-    // ---- kernel: heat-sink-coupled Qc(I) at fixed Tc and its derivatives (physics.md e) ----
+    // ---- kernel: heat-sink-coupled Qc(I) at fixed Tc and its derivatives ----
 
     static double coldHeatW(double s, double r, double k, double tc, double tamb, double rh, double i) {
         double th = hotSideK(s, r, k, tc, tamb, rh, i);
@@ -347,7 +361,7 @@ public final class OperatingPointSolver {
 
     /**
      * Current of the capacity peak at fixed Tc: root of the decreasing dQc/dI on
-     * [0, min(S·Tc/R, I_run)] (dQc/dI &lt; S·Tc − R·I, physics.md e), Newton with the analytic
+     * [0, min(S·Tc/R, I_run)] (dQc/dI = S·Tc − R·I − K·Th' &lt; S·Tc − R·I), Newton with the analytic
      * second derivative, kept inside the shrinking bracket by bisection. 0 when dQc/dI(0) ≤ 0.
      */
     static double peakCurrentA(double s, double r, double k, double tc, double tamb, double rh, double guessA) {
@@ -581,7 +595,7 @@ public final class OperatingPointSolver {
         return rh > 0 ? (1 + Math.sqrt(1 + 4 * rh * k)) / (2 * rh * s) : Double.POSITIVE_INFINITY;
     }
 
-    /** {Tc, Th} from the fixed-current 2x2 system by Cramer's rule (physics.md e.2). */
+    /** {Tc, Th} from the fixed-current 2x2 system by Cramer's rule. */
     private static double[] fixedCurrentJunctionsK(double s, double r, double k, CoolingCase c, double i, double det) {
         double rh = c.hotPathKPerW();
         double a11 = s * i + k;
@@ -593,8 +607,43 @@ public final class OperatingPointSolver {
         return new double[] {(b1 * a22 - a12 * b2) / det, (a11 * b2 - a21 * b1) / det};
     }
 
-    /** The first drive limit a point breaks, or null (physics.md e.5); shared with {@link DetailedSolver}. */
-    static Infeasible limitViolation(DriveLimits limits, double currentA, double voltageV) {
+    /**
+     * An infeasible point with the capacity at the case's object temperature filled in (the most heat that can be
+     * removed there with this heat sink, and its current), so that a script sees how far off the design is.
+     */
+    private static OperatingPoint withCapacity(OperatingPoint point, ModuleParameters module, CoolingCase c) {
+        if (point instanceof Infeasible i && Double.isNaN(i.maxHeatLoadW())) {
+            PeakPoint capacity = capacityAtObject(module, c);
+            return new Infeasible(i.reason(), i.detail(), capacity.heatW(), capacity.currentA());
+        }
+        return point;
+    }
+
+    /**
+     * Most heat removable with the object held at the case's temperature, from no solved point: the search starts
+     * at the peak with the cold face at the object temperature (zero load through the cold interface), or at
+     * that peak's heat when it is negative, so that Qpk(Tobj − Q·Rint,c) ≥ Q holds at the start
+     * (see {@link #capacityAtObject(double, double, double, double, double, double, double, double, double, double)}).
+     */
+    static PeakPoint capacityAtObject(ModuleParameters module, CoolingCase c) {
+        double s = module.seebeckVPerK();
+        double r = module.resistanceOhm();
+        double k = module.conductanceWPerK();
+        double objectK = c.objectK();
+        double rc = c.coldInterfaceKPerW();
+        double tamb = c.ambientK();
+        double rh = c.hotPathKPerW();
+        double peakA = peakCurrentA(s, r, k, objectK, tamb, rh, Double.NaN);
+        double startW = Math.min(0.0, coldHeatW(s, r, k, objectK, tamb, rh, peakA));
+        return capacityAtObject(s, r, k, objectK, rc, tamb, rh, startW, peakA, objectK - startW * rc);
+    }
+
+    /**
+     * The first limit the point breaks, or null: rated Imax, supply current, supply voltage, then the hot face
+     * (the module's stated maximum, or 250 °C when it states none: beyond that a point is of no physical use,
+     * whatever the equations give). Shared with {@link DetailedSolver}.
+     */
+    static Infeasible limitViolation(DriveLimits limits, double currentA, double voltageV, double hotK) {
         if (limits.hasRatedImax() && currentA > limits.ratedImaxA()) {
             return new Infeasible(Reason.CURRENT_ABOVE_IMAX,
                     format("needs %.2f A, above the rated Imax of %.2f A", currentA, limits.ratedImaxA()));
@@ -606,6 +655,15 @@ public final class OperatingPointSolver {
         if (!Double.isNaN(limits.supplyMaxV()) && voltageV > limits.supplyMaxV()) {
             return new Infeasible(Reason.SUPPLY_VOLTAGE_EXCEEDED, format(
                     "needs %.2f V at %.2f A, above the supply's %.2f V", voltageV, currentA, limits.supplyMaxV()));
+        }
+        if (!(hotK <= limits.hotFaceLimitK())) {
+            boolean stated = !Double.isNaN(limits.maxHotSideK());
+            return new Infeasible(stated ? Reason.HOT_SIDE_ABOVE_LIMIT : Reason.HOT_SIDE_BEYOND_USE, format(
+                    "at %.2f A the hot face would reach %.1f °C, above %s of %.1f °C: use a better heat sink, less"
+                            + " current, or a larger module", currentA, Units.celsiusFromKelvin(hotK),
+                    stated ? "the module's stated maximum" : "the 250 °C this tool allows for a module that states no"
+                            + " maximum (solder and ceramics give out before; common practice)",
+                    Units.celsiusFromKelvin(limits.hotFaceLimitK())));
         }
         return null;
     }
@@ -628,11 +686,16 @@ public final class OperatingPointSolver {
                 "needs %.2f W of cooling at a cold face of %.2f K; with this heat sink the peak there is %.2f W"
                         + " at %.2f A, and at most %.2f W can be removed while holding the object at %.2f K (%.2f °C)",
                 c.heatLoadW(), coldK, peakW, peakA, atObject.heatW(), c.objectK(),
-                Units.celsiusFromKelvin(c.objectK())));
+                Units.celsiusFromKelvin(c.objectK())), atObject.heatW(), atObject.currentA());
     }
 
+    /**
+     * The full answer at a solved point. {@code fixedDrive} says the current was given (or followed from a given
+     * voltage) rather than solved for the load at the set-point; only then can the point be over-driven.
+     */
     private static Solved complete(ModuleArray array, ModuleParameters module, CoolingCase c, DriveLimits limits,
-                                   double currentA, double voltageV, double coldK, double hotK, double objectK) {
+                                   double currentA, double voltageV, double coldK, double hotK, double objectK,
+                                   boolean fixedDrive) {
         double s = module.seebeckVPerK();
         double r = module.resistanceOhm();
         double k = module.conductanceWPerK();
@@ -645,8 +708,16 @@ public final class OperatingPointSolver {
         double cop = powerW > 0 ? loadW / powerW : Double.POSITIVE_INFINITY;
         // Everything that does not wait for the capacity and margin iterations comes first: its
         // divisions and square roots then overlap with those latency-bound iterations in the core.
+        double perD = 1 / (1 + rh * k - rh * s * currentA);
+        double thSlope = rh * (r * currentA + s * hotK) * perD;          // Th'
+        double slope = s * coldK - r * currentA - k * thSlope;           // Qc' = dQc/dI at this cold face
         double dewPointK = dewPointK(c);
-        List<Warning> warnings = warnings(module, limits, currentA, coldK, hotK, dewPointK);
+        double frostPointK = frostPointK(c, dewPointK);
+        List<Warning> warnings = warnings(module, limits, currentA, voltageV, coldK, hotK, ambientK, dewPointK,
+                frostPointK);
+        if (fixedDrive) {
+            warnings = overDriveWarnings(warnings, currentA, slope, objectK, ambientK);
+        }
         double fractionOfImax = limits.hasRatedImax() ? currentA / limits.ratedImaxA() : Double.NaN;
         double copOptimalA = module.copOptimalCurrentA(coldK, hotK);
         double maxCop = module.maxCop(coldK, hotK);
@@ -655,10 +726,7 @@ public final class OperatingPointSolver {
         // Start of the capacity peak: Qc' is concave in I (Qc‴ ≤ 0, see currentForLoadA), and the root
         // nearest zero of its second-order Taylor polynomial at the solved current is a near-peak
         // current. Th'' and Th‴ = 3·Rh·S·Th''/d follow from Th' without another division.
-        double perD = 1 / (1 + rh * k - rh * s * currentA);
-        double thSlope = rh * (r * currentA + s * hotK) * perD;          // Th'
         double thCurvature = rh * (r + 2 * s * thSlope) * perD;          // Th''
-        double slope = s * coldK - r * currentA - k * thSlope;           // Qc'
         double curvature = -r - k * thCurvature;                         // Qc'' < 0
         double thirdDerivative = -3 * k * rh * s * thCurvature * perD;   // Qc‴ ≤ 0
         // The discriminant is ≥ Qc''² left of the peak (Qc' > 0, Qc‴ ≤ 0); only over-driven fixed-current
@@ -674,22 +742,31 @@ public final class OperatingPointSolver {
                 : atLimitK;
         double marginK = objectK - (lowestColdK + loadW * rc);
         return new Solved(currentA, voltageV, powerW, cop, objectK, coldK, hotK, rejectedW, loadW, fractionOfImax,
-                atObject.heatW(), atObject.currentA(), marginK, copOptimalA, maxCop, dewPointK, warnings, perModule);
+                atObject.heatW(), atObject.currentA(), marginK, copOptimalA, maxCop, dewPointK, frostPointK, warnings,
+                perModule);
     }
 
+    /** Dew point of the ambient air, K; NaN without a humidity or outside the model's air range. */
     private static double dewPointK(CoolingCase c) {
-        if (!c.hasRelativeHumidity()) {
+        if (!c.hasRelativeHumidity() || !withinDewPointModel(c.ambientK())) {
             return Double.NaN;
-        }
-        double airC = Units.celsiusFromKelvin(c.ambientK());
-        if (airC < DewPointMagnus.LOWEST_AIR_C || airC > DewPointMagnus.HIGHEST_AIR_C) {
-            return Double.NaN; // outside the fit: no dew point rather than an extrapolated one
         }
         return DEW_POINT.dewPointK(c.ambientK(), c.relativeHumidity());
     }
 
-    private static List<Warning> warnings(ModuleParameters module, DriveLimits limits, double currentA, double coldK,
-                                          double hotK, double dewPointK) {
+    /** Frost point of the ambient air, K, when its dew point is below 0 °C; else NaN. */
+    private static double frostPointK(CoolingCase c, double dewPointK) {
+        return dewPointK < FREEZING_K ? DEW_POINT.frostPointK(c.ambientK(), c.relativeHumidity()) : Double.NaN;
+    }
+
+    private static boolean withinDewPointModel(double airK) {
+        double airC = Units.celsiusFromKelvin(airK);
+        return airC >= DEW_POINT.lowestAirC() && airC <= DEW_POINT.highestAirC();
+    }
+
+    private static List<Warning> warnings(ModuleParameters module, DriveLimits limits, double currentA, double voltageV,
+                                          double coldK, double hotK, double ambientK, double dewPointK,
+                                          double frostPointK) {
         List<Warning> warnings = null;
         if (limits.hasRatedImax() && currentA > NEAR_IMAX_FRACTION * limits.ratedImaxA()) {
             warnings = add(warnings, Warning.Code.NEAR_IMAX, format(
@@ -703,22 +780,79 @@ public final class OperatingPointSolver {
                             + " the COP collapses)",
                     hotK - coldK, 100 * (hotK - coldK) / dtMaxK, dtMaxK, 100 * NEAR_DTMAX_FRACTION));
         }
-        if (!Double.isNaN(limits.maxHotSideK()) && hotK > limits.maxHotSideK()) {
-            warnings = add(warnings, Warning.Code.HOT_SIDE_ABOVE_LIMIT, format(
-                    "the hot face reaches %.2f K (%.1f °C), above the module's %.2f K (%.1f °C)",
-                    hotK, Units.celsiusFromKelvin(hotK), limits.maxHotSideK(),
-                    Units.celsiusFromKelvin(limits.maxHotSideK())));
+        if (!Double.isNaN(dewPointK)) {
+            warnings = moistureWarning(warnings, coldK, ambientK, dewPointK, frostPointK);
         }
-        if (!Double.isNaN(dewPointK) && coldK < dewPointK + DEW_POINT_MARGIN_K) {
-            warnings = add(warnings, Warning.Code.CONDENSATION_RISK, coldK < dewPointK
-                    ? format("the cold face at %.1f °C is below the ambient dew point %.1f °C: water will condense on "
-                            + "it; seal, insulate or purge the cold side, or raise the set-point",
-                            Units.celsiusFromKelvin(coldK), Units.celsiusFromKelvin(dewPointK))
-                    : format("the cold face at %.1f °C is less than %.0f K above the ambient dew point %.1f °C: "
-                            + "seal or purge the cold side", Units.celsiusFromKelvin(coldK), DEW_POINT_MARGIN_K,
-                            Units.celsiusFromKelvin(dewPointK)));
+        if (SafetyLimits.isShockHazard(voltageV)) {
+            List<Warning> list = warnings == null ? new ArrayList<>(1) : warnings;
+            list.add(SafetyLimits.shockHazard("the terminal voltage", voltageV));
+            warnings = list;
         }
         return warnings == null ? List.of() : warnings;
+    }
+
+    /**
+     * Water on the cold face: below 0 °C dew point the frost point governs (ice forms there first, and melts
+     * to water when the cooler stops), else the dew point; a warning within {@link #DEW_POINT_MARGIN_K} of it.
+     * Outside the Magnus fit (air below −40 °C or above 50 °C) the value is extrapolated, the margin doubled,
+     * and the sentence says so.
+     */
+    private static List<Warning> moistureWarning(List<Warning> warnings, double coldK, double ambientK,
+                                                 double dewPointK, double frostPointK) {
+        double airC = Units.celsiusFromKelvin(ambientK);
+        boolean extrapolated = !DEW_POINT.withinFit(airC);
+        double marginK = extrapolated ? 2 * DEW_POINT_MARGIN_K : DEW_POINT_MARGIN_K;
+        boolean frost = !Double.isNaN(frostPointK);
+        double pointK = frost ? frostPointK : dewPointK;
+        if (!(coldK < pointK + marginK)) {
+            return warnings;
+        }
+        String point = frost ? "frost point" : "dew point";
+        String note = extrapolated ? format(" (the air at %.1f °C is outside the −40 to 50 °C range of the Magnus fit,"
+                + " so the %s is extrapolated and the margin doubled to %.0f K)", airC, point, marginK) : "";
+        String sentence;
+        if (frost) {
+            sentence = coldK < frostPointK
+                    ? format("the cold face at %.1f °C is below the ambient frost point %.1f °C (dew point %.1f °C):"
+                            + " ice will build on it and melt to water when the cooler stops; seal, insulate or purge"
+                            + " the cold side, or raise the set-point%s", Units.celsiusFromKelvin(coldK),
+                            Units.celsiusFromKelvin(frostPointK), Units.celsiusFromKelvin(dewPointK), note)
+                    : format("the cold face at %.1f °C is less than %.0f K above the ambient frost point %.1f °C:"
+                            + " seal or purge the cold side%s", Units.celsiusFromKelvin(coldK), marginK,
+                            Units.celsiusFromKelvin(frostPointK), note);
+        } else {
+            sentence = coldK < dewPointK
+                    ? format("the cold face at %.1f °C is below the ambient dew point %.1f °C: water will condense on "
+                            + "it; seal, insulate or purge the cold side, or raise the set-point%s",
+                            Units.celsiusFromKelvin(coldK), Units.celsiusFromKelvin(dewPointK), note)
+                    : format("the cold face at %.1f °C is less than %.0f K above the ambient dew point %.1f °C: "
+                            + "seal or purge the cold side%s", Units.celsiusFromKelvin(coldK), marginK,
+                            Units.celsiusFromKelvin(dewPointK), note);
+        }
+        return add(warnings, frost ? Warning.Code.FROST_RISK : Warning.Code.CONDENSATION_RISK, sentence);
+    }
+
+    /**
+     * At a fixed drive: over-driven when dQc/dI &lt; 0 at the point (beyond the capacity peak, more current
+     * cools less: the side of the upper root that the set-point solve never returns), and the cooled
+     * part warmer than the ambient.
+     */
+    private static List<Warning> overDriveWarnings(List<Warning> warnings, double currentA, double slopeWPerA,
+                                                   double objectK, double ambientK) {
+        List<Warning> list = warnings.isEmpty() ? null : new ArrayList<>(warnings);
+        if (currentA > 0 && slopeWPerA < 0) {
+            list = add(list, Warning.Code.OVER_DRIVEN, format(
+                    "at %.2f A the module is past its capacity peak: each extra ampere pumps %.2f W less, so less"
+                            + " current would hold the part colder and draw less power", currentA, -slopeWPerA));
+        }
+        if (objectK > ambientK) {
+            list = add(list, Warning.Code.OBJECT_ABOVE_AMBIENT, format(
+                    "the cooled part settles at %.1f °C, %.1f K above the %.1f °C ambient: at this drive the cooler"
+                            + " does not bring it below ambient%s", Units.celsiusFromKelvin(objectK),
+                    objectK - ambientK, Units.celsiusFromKelvin(ambientK),
+                    currentA > 0 && slopeWPerA < 0 ? " and its own heat warms it" : ""));
+        }
+        return list == null ? List.of() : list;
     }
 
     private static List<Warning> add(List<Warning> warnings, Warning.Code code, String sentence) {

@@ -15,7 +15,7 @@ import org.apache.commons.math3.util.Pair;
  * ΔTmax, and Qmax when stated, at the rating temperature ({@link DetailedSolver#ratingsAt}).
  *
  * <p>The equivalent geometry: N couples with N = round(S/(αp − αn)) from the lumped IMAX_VMAX_DTMAX
- * parameters at Tm = Th − ΔTmax/2 (physics.md b), 1 mm² legs whose length makes R match with ρ
+ * parameters at Tm = Th − ΔTmax/2 (the ideal rating relations derived from Ioffe's equations, see RatingsMethod), 1 mm² legs whose length makes R match with ρ
  * unscaled, no contacts (the factors absorb contacts and parasitics; only ρ·L/A and k·A/L matter to
  * the model). Then Levenberg–Marquardt (Commons Math) on the logarithms of the three factors, with the
  * relative rating errors as residuals and a forward-difference Jacobian. With three ratings the fit is

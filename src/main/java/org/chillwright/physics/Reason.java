@@ -1,6 +1,6 @@
 package org.chillwright.physics;
 
-/** Why no operating point exists (physics.md e, "No-solution conditions", and h). */
+/** Why no operating point exists: a result the solvers return with a sentence, not an exception. */
 public enum Reason {
     /** The load is above the most the module pumps at the required cold face with this heat sink (e.1). */
     LOAD_ABOVE_CAPACITY,
@@ -15,5 +15,12 @@ public enum Reason {
     /** The current needed is above the supply's maximum (e.5). */
     SUPPLY_CURRENT_EXCEEDED,
     /** A two-stage cascade has no interstage temperature between its cold and hot sides (h). */
-    INTERSTAGE_OUT_OF_RANGE
+    INTERSTAGE_OUT_OF_RANGE,
+    /** The hot face would pass the module's stated maximum temperature. */
+    HOT_SIDE_ABOVE_LIMIT,
+    /**
+     * The hot face would pass 250 °C, beyond any use of a module that states no maximum temperature
+     * ({@link SafetyLimits#HOT_FACE_WITHOUT_STATED_LIMIT_K}).
+     */
+    HOT_SIDE_BEYOND_USE
 }

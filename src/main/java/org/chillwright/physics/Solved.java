@@ -4,7 +4,7 @@ import java.util.List;
 
 /**
  * A feasible steady operating point of a cooler (module or array, terminal values) against a
- * {@link CoolingCase} (physics.md e and f). Temperatures in K.
+ * {@link CoolingCase} (see {@link OperatingPointSolver}). Temperatures in K.
  *
  * @param currentA              terminal current, A (0 in the passive case)
  * @param voltageV              terminal voltage V = S(Th − Tc) + I·R, V
@@ -21,16 +21,18 @@ import java.util.List;
  * @param currentAtMaxHeatLoadA current at that most heat, A
  * @param marginK               how much colder than objectK the object could be held at the same load with
  *                              the current limited to min(capacity-peak current, rated Imax, supply current), K
- * @param copOptimalCurrentA    current of best COP at the solved junction temperatures, A (physics.md f)
- * @param maxCop                best COP at the solved junction temperatures (physics.md f)
+ * @param copOptimalCurrentA    current of best COP at the solved junction temperatures, A (Ioffe 1957)
+ * @param maxCop                best COP at the solved junction temperatures (Ioffe 1957)
  * @param dewPointK             dew point of the ambient air, K; NaN when the humidity is unknown
+ * @param frostPointK           frost point of the ambient air, K, when its dew point is below 0 °C; else NaN
  * @param warnings              risks, empty when none
  * @param perModule             what one module of the array carries
  */
 public record Solved(double currentA, double voltageV, double powerW, double cop, double objectK, double coldSideK,
                      double hotSideK, double heatRejectedW, double heatLoadW, double fractionOfImax,
                      double maxHeatLoadW, double currentAtMaxHeatLoadA, double marginK, double copOptimalCurrentA,
-                     double maxCop, double dewPointK, List<Warning> warnings, ModuleShare perModule)
+                     double maxCop, double dewPointK, double frostPointK, List<Warning> warnings,
+                     ModuleShare perModule)
         implements OperatingPoint {
 
     public Solved {

@@ -34,7 +34,7 @@ import org.apache.commons.math3.stat.descriptive.rank.Percentile;
  * the set-point the object could be held at the same load with the current within the limits. Where it
  * does not, the same quantity is negative: the set-point minus the lowest object temperature reachable
  * at the load with the current within the rated Imax and supply current (a Brent search over the
- * fixed-current solve of physics.md e.2). Like {@code Solved.marginK}, it ignores the supply voltage.
+ * fixed-current solve of the fixed-current balance of OperatingPointSolver). Like {@code Solved.marginK}, it ignores the supply voltage.
  *
  * <p><b>Arrays.</b> Each module is drawn on its own. A series string adds S, R and K; parallel strings
  * combine as their Thevenin equivalent (R = 1/Σ(1/Rk), S = R·Σ(Sk/Rk), K = ΣKk): exact for the terminal

@@ -14,7 +14,8 @@ import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
 
 /**
  * Two-stage cascade: a cold stage stacked on a hot stage with no interstage resistance, between a
- * fixed cold side and a fixed hot side (physics.md h, derived there; case S15). Stage heat balance
+ * fixed cold side and a fixed hot side (derived here from the ideal equations per stage, Ioffe 1957 and
+ * Goldsmid 2016, from memory; case S15). Stage heat balance
  * Qh1 = Qc2 with the ideal equations per stage. Either stage may be an array equivalent
  * ({@link ModuleParameters#inArray}).
  *
@@ -40,7 +41,7 @@ public record TwoStageCascade(ModuleParameters coldStage, ModuleParameters hotSt
     }
 
     /**
-     * Interstage temperature for fixed stage currents, K (physics.md h):
+     * Interstage temperature for fixed stage currents, K (Qh1 = Qc2 solved for Ti):
      * Ti = (½I1²R1 + K1·Tc + ½I2²R2 + K2·Th)/(S2·I2 + K2 − S1·I1 + K1); NaN when the denominator is ≤ 0.
      */
     public double interstageK(double coldStageCurrentA, double hotStageCurrentA, double coldSideK, double hotSideK) {
@@ -56,7 +57,7 @@ public record TwoStageCascade(ModuleParameters coldStage, ModuleParameters hotSt
     }
 
     /**
-     * Steady point at fixed stage currents (physics.md h, "Fixed currents"). Infeasible with
+     * Steady point at fixed stage currents. Infeasible with
      * {@link Reason#INTERSTAGE_OUT_OF_RANGE} unless Tc &lt; Ti &lt; Th, and with
      * {@link Reason#DELTA_T_BEYOND_REACH} when the cold stage pumps no heat.
      *
@@ -91,7 +92,7 @@ public record TwoStageCascade(ModuleParameters coldStage, ModuleParameters hotSt
 
     /**
      * Both stages on one current (series wiring): the lower root of Qc1(I) = heatLoadW with Ti(I)
-     * from the fixed-current closed form (physics.md h, "Same current in both stages"). Qc1(I) is
+     * from the fixed-current closed form. Qc1(I) is
      * unimodal: its peak is found with Commons Math's Brent optimiser, then the root with Brent's
      * solver on [0, I_peak]. Infeasible with {@link Reason#LOAD_ABOVE_CAPACITY} above the peak.
      *

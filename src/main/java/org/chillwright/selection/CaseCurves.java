@@ -26,7 +26,7 @@ public record CaseCurves(double[] currentA, double[] coolingW, double[] cop, dou
     static final double[] DELTA_T_FAMILY_K = {0, 20, 40, 60};
 
     /**
-     * @param equivalent  the array as one module (physics.md g)
+     * @param equivalent  the array as one module ({@link org.chillwright.physics.ModuleArray#equivalent})
      * @param c           the case the solvers saw
      * @param hotSideK    the hot face for the fixed-ΔT family, K (the design's solved hot side)
      * @param maxCurrentA the right end of the grid, A (e.g. the rated Imax of the array)

@@ -36,7 +36,16 @@ public record Ranking(List<Candidate> candidates, List<Rejection> infeasible, in
         }
     }
 
-    /** Why a module is not among the candidates: a stable code and a sentence with the numbers. */
-    public record Rejection(long moduleId, String code, String message) {
+    /**
+     * Why a module is not among the candidates: a stable code and a sentence with the numbers, for the design
+     * the sentence names, with that design's capacity at the set-point.
+     *
+     * @param seriesCount           modules in series in the design named
+     * @param parallelCount         strings in parallel in the design named
+     * @param maxHeatLoadW          most heat that design can remove at the set-point with this heat sink, W
+     * @param currentAtMaxHeatLoadA current at that most heat, A
+     */
+    public record Rejection(long moduleId, String code, String message, int seriesCount, int parallelCount,
+                            double maxHeatLoadW, double currentAtMaxHeatLoadA) {
     }
 }

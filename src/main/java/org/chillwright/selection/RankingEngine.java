@@ -3,7 +3,6 @@ package org.chillwright.selection;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import java.util.List;
 import java.util.stream.IntStream;
 import org.chillwright.physics.CoolingCase;
 import org.chillwright.physics.DriveLimits;
@@ -12,14 +11,15 @@ import org.chillwright.physics.ModuleArray;
 import org.chillwright.physics.ModuleParameters;
 import org.chillwright.physics.OperatingPoint;
 import org.chillwright.physics.OperatingPointSolver;
+import org.chillwright.physics.SafetyLimits;
 import org.chillwright.physics.Solved;
 
 /**
  * Solves every module in every series × parallel split against one case and ranks the designs.
  *
  * <p>Rank first, detail later: a first pass runs the allocation-free lower-root solve
- * ({@link OperatingPointSolver#currentForLoadA}) for every design and checks the rated Imax and the
- * supply on its terminal values; only the designs that are shown (and, for the margin objective, every
+ * ({@link OperatingPointSolver#currentForLoadA}) for every design and checks the rated Imax, the
+ * supply and the hot-face limit on its terminal values; only the designs that are shown (and, for the margin objective, every
  * feasible one) get the full solve with capacity peak, margin in K and warnings. The two passes use the
  * same equations, so a design feasible in the first is feasible in the second.
  */
@@ -49,6 +49,13 @@ public final class RankingEngine {
         double supplyV = rankingCase.supplyMaxV();
         double supplyA = rankingCase.supplyMaxA();
 
+        // the hot face a design may reach: the module's stated maximum, or 250 °C when it states none
+        double[] hotFaceLimitK = new double[n];
+        for (int i = 0; i < n; i++) {
+            double statedK = table.maxHotSideK()[i];
+            hotFaceLimitK[i] = Double.isNaN(statedK) ? SafetyLimits.HOT_FACE_WITHOUT_STATED_LIMIT_K : statedK;
+        }
+
         // pass 1: terminal current, power and fraction of Imax of every design; NaN current = infeasible
         double[] currentA = new double[designs];
         double[] powerW = new double[designs];
@@ -65,7 +72,8 @@ public final class RankingEngine {
                 double imaxA = table.ratedImaxA()[i] * parallel;
                 double hotK = OperatingPointSolver.hotSideK(s, r, g, coldK, ambientK, hotPathKPerW, current);
                 double voltage = s * (hotK - coldK) + current * r;
-                boolean withinLimits = !(current > imaxA) && !(current > supplyA) && !(voltage > supplyV);
+                boolean withinLimits = !(current > imaxA) && !(current > supplyA) && !(voltage > supplyV)
+                        && !(hotK > hotFaceLimitK[i]);
                 currentA[d] = withinLimits ? current : Double.NaN;
                 powerW[d] = current * voltage;
                 fraction[d] = current / imaxA;
@@ -160,18 +168,21 @@ public final class RankingEngine {
         }
 
         var rejections = new ArrayList<Ranking.Rejection>();
+        int[] largest = configs[configs.length - 1];
         for (int i = 0; i < n; i++) {
             if (anyFeasible[i]) {
                 if (!shown[i] && belowMargin[i]) {
-                    rejections.add(new Ranking.Rejection(table.moduleIds()[i], BELOW_MIN_MARGIN,
+                    rejections.add(rejection(table.moduleIds()[i], BELOW_MIN_MARGIN,
                             "every design shown with this module leaves less than the required "
-                                    + rankingCase.minMarginK() + " K of margin"));
+                                    + rankingCase.minMarginK() + " K of margin", largest,
+                            solve(table, i, largest, rankingCase, c)));
                 }
                 continue;
             }
             if (onlyAboveFraction[i]) {
-                rejections.add(new Ranking.Rejection(table.moduleIds()[i], ABOVE_IMAX_FRACTION, String.format(
-                        "every design that works needs more than %.0f %% of the rated Imax", 100 * maxFraction)));
+                rejections.add(rejection(table.moduleIds()[i], ABOVE_IMAX_FRACTION, String.format(
+                        "every design that works needs more than %.0f %% of the rated Imax", 100 * maxFraction),
+                        largest, solve(table, i, largest, rankingCase, c)));
                 continue;
             }
             rejections.add(reasonFor(table, configs, i, rankingCase, c));
@@ -210,17 +221,35 @@ public final class RankingEngine {
         if (point instanceof Infeasible infeasible) {
             String prefix = configs.length == 1 ? "" : "even " + largest[0] + " in series × " + largest[1]
                     + " in parallel: ";
-            return new Ranking.Rejection(table.moduleIds()[i], infeasible.reason().name(), prefix + infeasible.detail());
+            return rejection(table.moduleIds()[i], infeasible.reason().name(), prefix + infeasible.detail(), largest,
+                    infeasible);
         }
         // the largest design works but needs more than a smaller one's limits allow (e.g. supply volts)
         for (int[] config : configs) {
             if (solve(table, i, config, rankingCase, c) instanceof Infeasible infeasible) {
-                return new Ranking.Rejection(table.moduleIds()[i], infeasible.reason().name(), infeasible.detail());
+                return rejection(table.moduleIds()[i], infeasible.reason().name(), infeasible.detail(), config,
+                        infeasible);
             }
         }
         // every design sits within the solver's tolerance of a limit: the two passes disagree only there
-        return new Ranking.Rejection(table.moduleIds()[i], AT_A_LIMIT,
-                "every design of this module runs right at its current or supply limit");
+        return rejection(table.moduleIds()[i], AT_A_LIMIT,
+                "every design of this module runs right at its current or supply limit", largest, point);
+    }
+
+    /** A rejection carrying the capacity at the set-point of the design it names (solved or not). */
+    private static Ranking.Rejection rejection(long moduleId, String code, String message, int[] config,
+                                               OperatingPoint point) {
+        double maxHeatLoadW = Double.NaN;
+        double currentAtMaxHeatLoadA = Double.NaN;
+        if (point instanceof Solved solved) {
+            maxHeatLoadW = solved.maxHeatLoadW();
+            currentAtMaxHeatLoadA = solved.currentAtMaxHeatLoadA();
+        } else if (point instanceof Infeasible infeasible) {
+            maxHeatLoadW = infeasible.maxHeatLoadW();
+            currentAtMaxHeatLoadA = infeasible.currentAtMaxHeatLoadA();
+        }
+        return new Ranking.Rejection(moduleId, code, message, config[0], config[1], maxHeatLoadW,
+                currentAtMaxHeatLoadA);
     }
 
     /**

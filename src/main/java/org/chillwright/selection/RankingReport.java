@@ -42,14 +42,17 @@ public final class RankingReport {
             + "them by test. Keep modules and drivers within their electrical limits. Never power a module without "
             + "its heat sink: if a fan or pump fails the hot side overheats within seconds, so fit an "
             + "over-temperature cut-off independent of the controller. Keep cold surfaces near electronics above "
-            + "the dew point. Follow local codes and licensed practice for electrical and safety matters.";
+            + "the dew point (the frost point below 0 C). Arrays above 60 V DC (SHOCK_HAZARD_VOLTAGE) are a shock "
+            + "hazard: guard live parts and follow the applicable standard. Follow local codes and licensed practice "
+            + "for electrical and safety matters.";
 
     static final String SOURCES = "Module equations: A.F. Ioffe, Semiconductor Thermoelements and Thermoelectric "
             + "Cooling (1957); H.J. Goldsmid, Introduction to Thermoelectricity (2016). Parameters from ratings: "
             + "S. Luo, Electronics Cooling (2008); H.S. Lee, Thermoelectrics: Design and Materials (2016), sec. 3.5. "
             + "Dew point: O.A. Alduchov and R.E. Eskridge, J. Appl. Meteorol. 35(4) (1996) 601-609. Heat-sink "
             + "coupling solved for the lower-current root of the cooling equation. Warning thresholds (0.8 Imax, "
-            + "0.7 dTmax, dew point + 2 K) are common practice with no single source.";
+            + "0.7 dTmax, dew or frost point + 2 K, 60 V DC, a 250 C hot face for modules without a stated "
+            + "maximum) are common practice with no single source.";
 
     private RankingReport() {
     }

@@ -29,7 +29,11 @@ public record RankingResult(List<Row> candidates, List<Refusal> infeasible, int 
                       String currency, HeatingCheck.Result heating) {
     }
 
-    /** A module with no design that works, and why. */
-    public record Refusal(long moduleId, String supplier, String partNumber, String code, String message) {
+    /**
+     * A module with no design that works, and why, with the capacity at the set-point of the design named
+     * (see {@link Ranking.Rejection}).
+     */
+    public record Refusal(long moduleId, String supplier, String partNumber, String code, String message,
+                          int seriesCount, int parallelCount, double maxHeatLoadW, double currentAtMaxHeatLoadA) {
     }
 }

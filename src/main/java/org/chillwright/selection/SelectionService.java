@@ -63,7 +63,7 @@ public class SelectionService {
         var refusals = ranking.infeasible().stream().map(r -> {
             int i = snapshot.indexOf(r.moduleId());
             return new RankingResult.Refusal(r.moduleId(), snapshot.supplier(i), snapshot.partNumber(i), r.code(),
-                    r.message());
+                    r.message(), r.seriesCount(), r.parallelCount(), r.maxHeatLoadW(), r.currentAtMaxHeatLoadA());
         }).toList();
         return new RankingResult(rowsOut, refusals, ranking.feasible(), ranking.evaluated(), ranking.elapsedNanos(),
                 snapshot.revision());

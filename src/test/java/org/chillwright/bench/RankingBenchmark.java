@@ -38,7 +38,7 @@ public class RankingBenchmark {
 
     @Setup
     public void setUp() {
-        // invented modules spread around the synthetic TM-A of check-cases.json (fixed seed: comparable runs)
+        // invented modules spread around the synthetic TM-A of the check cases (fixed seed: comparable runs)
         var random = new SplittableRandom(7);
         long[] ids = new long[MODULES];
         double[] s = new double[MODULES];

@@ -42,7 +42,7 @@ class HarvestJourneyIT extends BrowserJourney {
         wait.until(ExpectedConditions.presenceOfElementLocated(By.cssSelector("table.ranking")));
         assertThat(driver.findElement(By.cssSelector("[role=status]")).getText()).contains("designs evaluated");
         assertThat(driver.findElements(By.cssSelector("table.ranking tbody tr"))).hasSizeGreaterThanOrEqualTo(2);
-        // 138 °C open-circuit hot face for one module, 130 °C for two (physics.md i at I = 0): above 80 °C
+        // 138 °C open-circuit hot face for one module, 130 °C for two (the node balances at I = 0): above 80 °C
         assertThat(driver.findElement(By.cssSelector("table.infeasible")).getText()).contains("HRV-COOL")
                 .contains("HOT_SIDE_ABOVE_LIMIT");
         browser.screenshot("harvest-ranking");

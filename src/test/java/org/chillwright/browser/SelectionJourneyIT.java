@@ -29,7 +29,7 @@ class SelectionJourneyIT extends BrowserJourney {
         var wait = browser.waitUpTo(Duration.ofSeconds(15));
         driver.get(url("/cases/new"));
 
-        // the check-cases.json S10 set-up, typed in: 10 W at 5 °C, 25 °C ambient, 0.3 K/W sink
+        // the check case S10 set-up, typed in: 10 W at 5 °C, 25 °C ambient, 0.3 K/W sink
         type("objectTemperature", "5");
         type("ambientTemperature", "25");
         type("activeLoad", "10");

@@ -23,8 +23,8 @@ import org.chillwright.physics.Units;
  * spread, contact resistance and a few per cent of parasitic conductance) and its ratings come from
  * the physics engine. The rating tests are modelled at their own mean temperatures, so the stated
  * ratings disagree by a few per cent as real ones do: ΔTmax, Imax and Vmax with the properties at
- * the colder mean temperature of the ΔTmax test, Qmax with those at the hot side (physics.md b,
- * "Re-evaluating at another hot-side temperature", item 2). The temperature slopes of the
+ * the colder mean temperature of the ΔTmax test, Qmax with those at the hot side (each rating test has its
+ * own mean temperature: Th − ΔTmax/2 for ΔTmax, Th for Qmax). The temperature slopes of the
  * properties are invented, common practice (no source). The same seed always gives the same file.
  *
  * <p>Run: {@code ./mvnw -q test-compile exec:java -Dexec.classpathScope=test

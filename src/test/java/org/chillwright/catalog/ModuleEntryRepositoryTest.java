@@ -53,7 +53,7 @@ class ModuleEntryRepositoryTest {
         long id = stored(CatalogFixtures.rated("Frostline Components", "FC-127-06")).getId();
 
         var spec = modules.findById(id).orElseThrow().toSpec();
-        // S = Vmax/Th (physics.md b, eq. i): 15.4 V / 298.15 K
+        // S = Vmax/Th (Vmax = S·Th, the ideal rating relations): 15.4 V / 298.15 K
         assertThat(spec.parameters().seebeckVPerK()).isCloseTo(15.4 / 298.15, org.assertj.core.data.Offset.offset(1e-12));
         assertThat(spec.listedQmaxW()).isEqualTo(56.0);
     }

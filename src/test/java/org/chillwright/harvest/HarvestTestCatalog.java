@@ -14,7 +14,7 @@ import org.chillwright.selection.TestCatalog;
 
 /**
  * Invented generator test modules under a supplier name only the harvest tests use. HRV-A carries the
- * ideal ratings of check-cases.json's synthetic TM-A at 300 K (S02), so it derives back to S 0.04 V/K,
+ * ideal ratings of the check cases' synthetic TM-A at 300 K (S02), so it derives back to S 0.04 V/K,
  * R 2.4 Ω, K 0.25 W/K (S03); HRV-HALF has half its leg area (R 4.8 Ω, K 0.125 W/K) and states no
  * temperature limit; HRV-COOL is HRV-A limited to 80 °C; HRV-OLD is obsolete.
  */
@@ -43,7 +43,7 @@ public final class HarvestTestCatalog {
         add(catalog, "HRV-OLD", 1, 200.0, Lifecycle.OBSOLETE, "9.00");
     }
 
-    /** TM-A with its legs' area scaled: Imax, Qmax scale with area, Vmax and ΔTmax do not (physics.md c). */
+    /** TM-A with its legs' area scaled: Imax, Qmax scale with area, Vmax and ΔTmax do not (Goldsmid 2016, from memory). */
     private static void add(CatalogService catalog, String partNumber, double areaScale, Double maxOperatingC,
                             Lifecycle lifecycle, String price) {
         var ratings = new RatedInputs(TestCatalog.TM_A_IMAX_A * areaScale, TestCatalog.TM_A_VMAX_V,

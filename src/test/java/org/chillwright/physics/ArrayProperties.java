@@ -17,7 +17,7 @@ class ArrayProperties {
                                                @ForAll @Scale(6) @DoubleRange(min = 0.05, max = 2) double k,
                                                @ForAll @IntRange(min = 1, max = 12) int seriesCount,
                                                @ForAll @IntRange(min = 1, max = 12) int parallelCount) {
-        // Source: Z invariant under arrays, physics.md g (derived there; case S14).
+        // Source: Z invariant under arrays (circuit algebra of identical modules; case S14).
         var m = new ModuleParameters(s, r, k);
         assertThat(m.inArray(seriesCount, parallelCount).figureOfMeritPerK())
                 .isCloseTo(m.figureOfMeritPerK(), withinPercentage(1e-10));
@@ -29,7 +29,7 @@ class ArrayProperties {
                                             @ForAll @Scale(6) @DoubleRange(min = 0.05, max = 2) double k,
                                             @ForAll @IntRange(min = 1, max = 12) int seriesCount,
                                             @ForAll @IntRange(min = 1, max = 12) int parallelCount) {
-        // Source: physics.md g: Imax·np, Vmax·ns, Qmax·N for the equivalent module.
+        // Source: circuit algebra of identical modules: Imax·np, Vmax·ns, Qmax·N for the equivalent module.
         var m = new ModuleParameters(s, r, k);
         MaxRatings scaled = m.ratingsAt(300).inArray(seriesCount, parallelCount);
         MaxRatings ofArray = m.inArray(seriesCount, parallelCount).ratingsAt(300);

@@ -29,7 +29,7 @@ class CooldownTest {
 
     @Test
     void settlesAtTheSteadyBalance() {
-        // Source: at T∞ the lumped balance Qload + (Tamb - T)/Rleak = Qc(T) holds, physics.md j.
+        // Source: at T∞ the lumped balance Qload + (Tamb - T)/Rleak = Qc(T) holds, lumped capacitance (Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, ch. 5, from memory).
         var module = new ModuleParameters(0.04, 2.4, 0.25);
         double finalK = S16.finalK();
         assertThat(2 + (300 - finalK) / 20).isCloseTo(module.coldSideHeatW(2, finalK, 300), within(1e-9));

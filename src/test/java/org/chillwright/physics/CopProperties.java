@@ -17,7 +17,7 @@ class CopProperties {
                              @ForAll @Scale(6) @DoubleRange(min = 0.01, max = 20) double currentA,
                              @ForAll @Scale(6) @DoubleRange(min = 200, max = 320) double coldK,
                              @ForAll @Scale(6) @DoubleRange(min = 0.5, max = 80) double dtK) {
-        // Source: second law, COP <= Tc/(Th - Tc) (physics.md f).
+        // Source: second law, COP <= Tc/(Th - Tc) (Ioffe 1957, from memory).
         var m = new ModuleParameters(s, r, k);
         double hotK = coldK + dtK;
         double qc = m.coldSideHeatW(currentA, coldK, hotK);
@@ -31,7 +31,7 @@ class CopProperties {
     void bestCopStaysBelowCarnotForAnyFigureOfMerit(@ForAll @Scale(6) @DoubleRange(min = 1e-4, max = 100) double zPerK,
                                                     @ForAll @Scale(6) @DoubleRange(min = 100, max = 320) double coldK,
                                                     @ForAll @Scale(6) @DoubleRange(min = 0.5, max = 100) double dtK) {
-        // Source: COPmax < COP_Carnot, physics.md f (Ioffe 1957, from memory).
+        // Source: COPmax < COP_Carnot, Ioffe 1957, from memory.
         assertThat(ModuleParameters.maxCop(zPerK, coldK, coldK + dtK))
                 .isLessThan(ModuleParameters.carnotCop(coldK, coldK + dtK));
     }

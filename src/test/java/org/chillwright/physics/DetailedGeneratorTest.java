@@ -12,7 +12,7 @@ class DetailedGeneratorTest {
 
     @Test
     void constantPropertiesReproduceTheLumpedGenerator() {
-        // Identity: the ideal generator equations with heat exchangers (physics.md i, case S13 set-up).
+        // Identity: the ideal generator equations with heat exchangers (Ioffe 1957; Rowe (ed.), CRC Handbook of Thermoelectrics, 1995; as GeneratorSolver, case S13 set-up).
         var c = new GeneratorCase(373.15, 298.15, 0.5, 0.3);
         GeneratorPoint lumped = new GeneratorSolver().atLoad(TM_A, c, 2.0);
         GeneratorPoint detailed = solver.generatorAtLoad(DetailedModule.ofConstantParameters(TM_A), c, 2.0)
@@ -25,7 +25,7 @@ class DetailedGeneratorTest {
 
     @Test
     void theDetailedGeneratorBalancesHeatAndPowerAcrossALargeDifference() {
-        // First law: Qh,in − Qc,out = P (physics.md i); the network Th = Tsrc − Rhx,h·Qh,in.
+        // First law: Qh,in − Qc,out = P (Ioffe 1957; Rowe (ed.), CRC Handbook of Thermoelectrics, 1995; as GeneratorSolver); the network Th = Tsrc − Rhx,h·Qh,in.
         var c = new GeneratorCase(423.15, 293.15, 0.2, 0.2);
         DetailedGeneratorPoint p = solver.generatorAtLoad(DetailedSolverTest.BI2TE3_MODULE, c, 3.0).orElseThrow();
         GeneratorPoint g = p.point();

@@ -25,7 +25,7 @@ class DetailedModelProperties {
             @ForAll @DoubleRange(min = 0, max = 10) double contactNanoOhmM2,
             @ForAll @DoubleRange(min = 0, max = 10) double thermalContactMicroM2KPerW,
             @ForAll @IntRange(min = 1, max = 40) int cells) {
-        // First law Qh − Qc = I·V (physics.md a), which the box scheme keeps to the Newton residual.
+        // First law Qh − Qc = I·V (the ideal equations: Ioffe 1957; Goldsmid 2016), which the box scheme keeps to the Newton residual.
         var array = DetailedArray.single(module(lengthMm, contactNanoOhmM2 * 1e-9, thermalContactMicroM2KPerW * 1e-6));
         new DetailedSolver(cells).atFaces(array, currentA, coldK, coldK + differenceK).ifPresent(f -> {
             double scale = Math.max(Math.abs(f.hotSideHeatW()), Math.max(Math.abs(f.coldSideHeatW()),
@@ -61,7 +61,7 @@ class DetailedModelProperties {
             @ForAll @DoubleRange(min = 0.05, max = 0.8) double sinkKPerW) {
         // Brute force written here: step the current up from 0 in small steps, close the hot balance
         // Th = Tamb + Rh·Qh by plain fixed-point iteration at each step, and take the first step at which
-        // Qc reaches the load (the lower root, physics.md e); the solver must agree within one step.
+        // Qc reaches the load (the lower root, the heat-sink network of OperatingPointSolver); the solver must agree within one step.
         var module = module(1.2, 0, 0);
         var array = DetailedArray.single(module);
         double ambientK = 300;

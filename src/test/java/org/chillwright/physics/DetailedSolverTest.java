@@ -25,7 +25,7 @@ class DetailedSolverTest {
     @Test
     void constantPropertiesReproduceTheIdealEquationsBetweenFixedFaces() {
         // Identity: with constant α, ρ, k the exact leg profile is quadratic and the ideal equations
-        // (physics.md a) are exact; the box scheme is exact for quadratics, even on one cell.
+        // (the ideal equations: Ioffe 1957; Goldsmid 2016) are exact; the box scheme is exact for quadratics, even on one cell.
         var array = DetailedArray.single(DetailedModule.ofConstantParameters(TM_A));
         for (int cells : new int[] {1, 3, 16}) {
             FaceSolution f = new DetailedSolver(cells).atFaces(array, 2.5, 275, 310).orElseThrow();
@@ -37,7 +37,7 @@ class DetailedSolverTest {
 
     @Test
     void constantPropertiesReproduceTheLumpedOperatingPointToOnePartPerMillion() {
-        // Identity: the same network and ideal equations as OperatingPointSolver (physics.md e).
+        // Identity: the same network and ideal equations as OperatingPointSolver (the heat-sink network of OperatingPointSolver).
         Solved lumped = (Solved) new OperatingPointSolver().solve(TM_A, S10, DriveLimits.NONE);
         DetailedPoint detailed = (DetailedPoint) solver.solve(
                 DetailedArray.single(DetailedModule.ofConstantParameters(TM_A)), S10, DriveLimits.NONE);
@@ -52,7 +52,7 @@ class DetailedSolverTest {
 
     @Test
     void constantPropertiesReproduceTheLumpedArrayOperatingPoint() {
-        // Identity: physics.md g, identical modules on common plates.
+        // Identity: derived here: identical modules on common plates, as ModuleArray, identical modules on common plates.
         var lumpedArray = new ModuleArray(TM_A, 2, 2);
         var c = new CoolingCase(283.15, 308.15, 30, 0.1, 0.02, 0.02);
         Solved lumped = (Solved) new OperatingPointSolver().solve(lumpedArray, c, DriveLimits.NONE);
@@ -65,7 +65,7 @@ class DetailedSolverTest {
 
     @Test
     void needsNoCurrentWhenConductionCarriesTheLoad() {
-        // Passive case of physics.md e, as in the lumped solve.
+        // Passive case of the heat-sink network of OperatingPointSolver, as in the lumped solve.
         var warmObject = new CoolingCase(310, 298.15, 1, 0.3, 0.1, 0.05);
         DetailedPoint p = (DetailedPoint) solver.solve(DetailedArray.single(BI2TE3_MODULE), warmObject,
                 DriveLimits.NONE);
@@ -82,7 +82,7 @@ class DetailedSolverTest {
 
     @Test
     void closesTheNetworkAndTheEnergyBalanceAtTheOperatingPoint() {
-        // Network Th = Tamb + Qh·Rh and first law Qh = Qc + P (physics.md e and a).
+        // Network Th = Tamb + Qh·Rh and first law Qh = Qc + P (the heat-sink network of OperatingPointSolver and the ideal equations of ModuleParameters).
         DetailedPoint p = (DetailedPoint) solver.solve(DetailedArray.single(BI2TE3_MODULE), S10, DriveLimits.NONE);
         assertThat(p.hotSideK()).isCloseTo(S10.ambientK() + S10.hotPathKPerW() * p.heatRejectedW(), within(1e-6));
         assertRelative(p.heatRejectedW(), p.heatLoadW() + p.powerW(), 1e-9);

@@ -17,7 +17,7 @@ class EnergyBalanceProperties {
                                            @ForAll @Scale(6) @DoubleRange(min = 0, max = 20) double currentA,
                                            @ForAll @Scale(6) @DoubleRange(min = 200, max = 350) double coldK,
                                            @ForAll @Scale(6) @DoubleRange(min = 250, max = 400) double hotK) {
-        // Source: first law P = Qh - Qc, physics.md a.
+        // Source: first law P = Qh - Qc (Ioffe 1957; Goldsmid 2016, from memory).
         var m = new ModuleParameters(s, r, k);
         double qh = m.hotSideHeatW(currentA, coldK, hotK);
         double sum = m.coldSideHeatW(currentA, coldK, hotK) + m.powerW(currentA, coldK, hotK);
@@ -31,7 +31,7 @@ class EnergyBalanceProperties {
                                             @ForAll @Scale(6) @DoubleRange(min = 260, max = 300) double objectK,
                                             @ForAll @Scale(6) @DoubleRange(min = 0, max = 20) double loadW,
                                             @ForAll @Scale(6) @DoubleRange(min = 0, max = 1) double sinkKPerW) {
-        // Source: thermal network Th = Tamb + Qh·Rh with Qh = Qc + P, physics.md e.
+        // Source: thermal network Th = Tamb + Qh·Rh with Qh = Qc + P, the heat-sink network, derived from the ideal equations.
         var c = new CoolingCase(objectK, 298.15, loadW, sinkKPerW, 0.05, 0.05);
         if (new OperatingPointSolver().solve(new ModuleParameters(s, r, k), c, DriveLimits.NONE) instanceof Solved p
                 && p.currentA() > 0) {

@@ -6,8 +6,8 @@ import static org.assertj.core.api.Assertions.within;
 import org.junit.jupiter.api.Test;
 
 /**
- * Heating with the current reversed, module TM-A of check-cases.json (S 0.04 V/K, R 2.4 Ω, K 0.25 W/K).
- * The same ideal equations as cooling with the faces' roles swapped (physics.md a).
+ * Heating with the current reversed, module TM-A of the check cases (S 0.04 V/K, R 2.4 Ω, K 0.25 W/K).
+ * The same ideal equations as cooling with the faces' roles swapped (Ioffe 1957; Goldsmid 2016, from memory).
  */
 class HeatingCheckTest {
 
@@ -17,7 +17,7 @@ class HeatingCheckTest {
     @Test
     void idealSinkMatchesTheQuadraticOfTheHotSideEquation() {
         // Rh = 0 and no interface: Th = Tobj, Tc = Tamb, so Q = S·I·Th + ½·I²·R − K·ΔT is a quadratic in I
-        // whose positive root is I = [−S·Th + √(S²Th² + 2R(Q + K·ΔT))]/R (hand algebra, physics.md a)
+        // whose positive root is I = [−S·Th + √(S²Th² + 2R(Q + K·ΔT))]/R (hand algebra on the ideal equations)
         double th = 298.15;
         double tc = 263.15;
         double q = 6;

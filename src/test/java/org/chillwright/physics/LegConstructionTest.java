@@ -10,7 +10,7 @@ class LegConstructionTest {
 
     @Test
     void eachLegUsesItsOwnArea() {
-        // Source: leg relations R = N(ρp L/Ap + ρn L/An), K = N(kp Ap + kn An)/L, physics.md c (Goldsmid 2016,
+        // Source: leg relations R = N(ρp L/Ap + ρn L/An), K = N(kp Ap + kn An)/L (Goldsmid 2016,
         // from memory); hand arithmetic for 10 couples, Ap = 1 mm², An = 2 mm², L = 1 mm:
         // R = 10(0.01 + 0.005) = 0.15 Ω, K = 10(1.5e-3 + 3e-3) = 0.045 W/K.
         var legs = new LegConstruction(10, 1e-6, 2e-6, 1e-3, 2e-4, -2e-4, 1e-5, 1e-5, 1.5, 1.5, 0);

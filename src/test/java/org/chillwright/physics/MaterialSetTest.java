@@ -12,7 +12,7 @@ class MaterialSetTest {
 
     @Test
     void theBismuthTellurideFitGivesTypicalRoomTemperatureValues() {
-        // Sanity against physics.md d (Goldsmid; Rowe CRC Handbook 1995, from memory): |α| about 200 µV/K,
+        // Sanity against Goldsmid 2016 and Rowe (ed.), CRC Handbook 1995 (from memory): |α| about 200 µV/K,
         // ρ about 1e-5 Ω·m, k about 1.5 W/(m·K), ZT about 0.7 to 1 at 300 K. Values of the fit at 300 K
         // evaluated by hand from the printed coefficients: α = 2.2224e-5 + 9.306e-7·300 − 9.905e-10·300².
         LegMaterial p = SET.p();
@@ -27,7 +27,7 @@ class MaterialSetTest {
 
     @Test
     void theThomsonCoefficientIsTemperatureTimesTheSeebeckSlope() {
-        // Kelvin's second relation τ = T·dα/dT (physics.md d); positive for this fit near room temperature.
+        // Kelvin's second relation τ = T·dα/dT (Goldsmid 2016, from memory); positive for this fit near room temperature.
         double slope = 9.306e-7 - 2 * 9.905e-10 * 300;
         assertThat(SET.p().thomsonVPerK(300)).isCloseTo(300 * slope, within(1e-15));
         assertThat(SET.p().thomsonVPerK(300)).isPositive();

@@ -33,14 +33,14 @@ class MaxRatingsTest {
 
     @Test
     void impliedQmaxFollowsTheConsistencyRelation() {
-        // Source: Qmax = Imax·Vmax(Th + dTmax)/(2Th), physics.md b (derived there); hand arithmetic:
+        // Source: Qmax = Imax·Vmax(Th + dTmax)/(2Th) (derived from the ideal equations); hand arithmetic:
         // 3.9 · 12.4 · 368 / 600 = 29.6608 W.
         assertThat(MaxRatings.withoutQmax(3.9, 12.4, 68, 300).impliedQmaxW()).isCloseTo(29.6608, within(1e-9));
     }
 
     @Test
     void arrayRatingsScaleByWiring() {
-        // Source: physics.md g: Imax·np, Vmax·ns, Qmax·N, dTmax unchanged.
+        // Source: circuit algebra of identical modules: Imax·np, Vmax·ns, Qmax·N, dTmax unchanged.
         MaxRatings array = new MaxRatings(3.9, 12.4, 27, 68, 300).inArray(2, 3);
         assertThat(array.imaxA()).isCloseTo(11.7, within(1e-12));
         assertThat(array.vmaxV()).isCloseTo(24.8, within(1e-12));

@@ -20,7 +20,7 @@ class OperatingPointProperties {
                                   @ForAll @Scale(6) @DoubleRange(min = 0, max = 30) double loadW,
                                   @ForAll @Scale(6) @DoubleRange(min = 0, max = 1.5) double sinkKPerW,
                                   @ForAll @Scale(6) @DoubleRange(min = 0, max = 0.3) double coldKPerW) {
-        // Source: root choice, physics.md e and pitfall 8: the returned current is at or below the capacity
+        // Source: root choice, the lower-root choice of the heat-sink network: the returned current is at or below the capacity
         // peak, it pumps the load, and no smaller current does.
         var m = new ModuleParameters(s, r, k);
         var c = new CoolingCase(objectK, 298.15, loadW, sinkKPerW, coldKPerW, 0.05);
@@ -46,7 +46,7 @@ class OperatingPointProperties {
                                    @ForAll @Scale(6) @DoubleRange(min = 0.1, max = 1) double k,
                                    @ForAll @Scale(6) @DoubleRange(min = 5, max = 40) double objectAboveAmbientK,
                                    @ForAll @Scale(6) @DoubleRange(min = 0, max = 0.999) double fractionOfConduction) {
-        // Source: passive case, physics.md e: Qc(0) >= Qload returns I = 0.
+        // Source: passive case, the heat-sink network, derived from the ideal equations: Qc(0) >= Qload returns I = 0.
         double objectK = 298.15 + objectAboveAmbientK;
         double conductedW = k * objectAboveAmbientK / (1 + 0.35 * k); // Qc(0) with Rh = 0.35 K/W, Rint,c = 0
         var c = new CoolingCase(objectK, 298.15, fractionOfConduction * conductedW, 0.3, 0, 0.05);

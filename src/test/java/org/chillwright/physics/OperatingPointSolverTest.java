@@ -12,7 +12,7 @@ import org.junit.jupiter.params.provider.MethodSource;
 
 class OperatingPointSolverTest {
 
-    /** Synthetic module TM-A of check-cases.json. */
+    /** Synthetic module TM-A of the check cases. */
     private static final ModuleParameters TM_A = new ModuleParameters(0.04, 2.4, 0.25);
     /** The set-up of check case S10: 10 W at 278.15 K, ambient 298.15 K, sink 0.3, cold 0.1, hot 0.05 K/W. */
     private static final CoolingCase S10 = new CoolingCase(278.15, 298.15, 10, 0.3, 0.1, 0.05);
@@ -31,7 +31,7 @@ class OperatingPointSolverTest {
 
     @Test
     void needsNoCurrentWhenConductionCarriesTheLoad() {
-        // Source: passive case, physics.md e: Qc(0) >= Qload needs no current.
+        // Source: passive case, the heat-sink network, derived from the ideal equations: Qc(0) >= Qload needs no current.
         var warmObject = new CoolingCase(310, 298.15, 1, 0.3, 0.1, 0.05);
         Solved point = solved(solver.solve(TM_A, warmObject, DriveLimits.NONE));
         assertThat(point.currentA()).isZero();
@@ -40,7 +40,7 @@ class OperatingPointSolverTest {
 
     @Test
     void returnsTheLowerRootBelowThePeak() {
-        // Source: root choice, physics.md e and pitfall 8: the lower root has the smaller current.
+        // Source: root choice, the lower-root choice of the heat-sink network: the lower root has the smaller current.
         Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
         CapacityPeak peak = OperatingPointSolver.capacityPeak(TM_A, S10.coldSideAtLoadK(), S10.ambientK(),
                 S10.hotPathKPerW());
@@ -51,7 +51,7 @@ class OperatingPointSolverTest {
 
     @Test
     void satisfiesTheHotSideNetwork() {
-        // Source: thermal network Th = Tamb + Qh·Rh, physics.md e.
+        // Source: thermal network Th = Tamb + Qh·Rh, the heat-sink network, derived from the ideal equations.
         Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
         assertThat(point.hotSideK()).isCloseTo(298.15 + 0.35 * point.heatRejectedW(), within(1e-9));
     }
@@ -72,7 +72,7 @@ class OperatingPointSolverTest {
 
     @Test
     void fastPathWithAnIdealSinkIsTheClosedForm() {
-        // Source: physics.md e, Rh = 0 closed form (case S09): Qc is then exactly quadratic, so the
+        // Source: the Rh = 0 closed form of the quadratic Qc(I) (case S09): Qc is then exactly quadratic, so the
         // Taylor start of the Newton iteration is already the root.
         double hotK = 298.15;
         double fastA = OperatingPointSolver.currentForLoadA(0.04, 2.4, 0.25, 277.15, hotK, 0, 10);
@@ -162,7 +162,7 @@ class OperatingPointSolverTest {
 
     @Test
     void copStaysBelowTheBestCopAtTheSameJunctions() {
-        // Source: COPmax at fixed Tc, Th, physics.md f (Ioffe 1957, from memory).
+        // Source: COPmax at fixed Tc, Th, Ioffe 1957, from memory.
         Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
         assertThat(point.cop()).isLessThanOrEqualTo(point.maxCop());
         assertThat(point.copOptimalCurrentA()).isLessThan(point.currentA());
@@ -227,12 +227,43 @@ class OperatingPointSolverTest {
 
     @Test
     void explainsRunawayAtFixedCurrent() {
-        // Source: det = K + S·I - Rh·S²·I² <= 0 has no steady state, physics.md e.2; with Rh = 10 K/W the
+        // Source: det = K + S·I - Rh·S²·I² <= 0 has no steady state, the fixed-current balance; with Rh = 10 K/W the
         // determinant vanishes at (1 + √(1 + 4·Rh·K))/(2·Rh·S) = 5.40 A (hand arithmetic).
         var weakSink = new CoolingCase(278.15, 298.15, 1, 9.95, 0.1, 0.05);
         Infeasible point = infeasible(solver.atCurrent(ModuleArray.single(TM_A), weakSink, DriveLimits.NONE, 6));
         assertThat(point.reason()).isEqualTo(Reason.HEAT_SINK_RUNAWAY);
         assertThat(point.detail()).contains("runaway from 5.40 A");
+    }
+
+    @Test
+    void aLoadAboveCapacityStillCarriesTheCapacityAtTheSetPoint() {
+        // check case S11: 25 W on the S10 set-up cannot be held. The most that can be removed at 5 °C with this
+        // heat sink, and its current, from a brute-force scan of the raw balances (CoolerBruteForce)
+        var s11 = S10.withHeatLoadW(25);
+        Infeasible point = infeasible(solver.solve(TM_A, s11, DriveLimits.NONE));
+        double[] capacity = CoolerBruteForce.capacityAtObject(TM_A, s11);
+        assertThat(point.reason()).isEqualTo(Reason.LOAD_ABOVE_CAPACITY);
+        assertThat(point.maxHeatLoadW()).isCloseTo(capacity[0], within(1e-6)).isLessThan(25);
+        assertThat(point.currentAtMaxHeatLoadA()).isCloseTo(capacity[1], within(1e-4));
+    }
+
+    @Test
+    void aPointRefusedForItsCurrentLimitStillCarriesItsCapacity() {
+        // S10 needs 1.96 A; a 1.5 A rating refuses it, but the set-point capacity is the design's all the same
+        Infeasible point = infeasible(solver.solve(TM_A, S10, DriveLimits.ofRatedImaxA(1.5)));
+        double[] capacity = CoolerBruteForce.capacityAtObject(TM_A, S10);
+        assertThat(point.reason()).isEqualTo(Reason.CURRENT_ABOVE_IMAX);
+        assertThat(point.maxHeatLoadW()).isCloseTo(capacity[0], within(1e-6));
+        assertThat(point.currentAtMaxHeatLoadA()).isCloseTo(capacity[1], within(1e-4));
+    }
+
+    @Test
+    void aRunawayAtFixedCurrentStillCarriesTheCapacityAtTheCaseTemperature() {
+        var weakSink = new CoolingCase(278.15, 298.15, 1, 9.95, 0.1, 0.05);
+        Infeasible point = infeasible(solver.atCurrent(ModuleArray.single(TM_A), weakSink, DriveLimits.NONE, 6));
+        assertThat(point.reason()).isEqualTo(Reason.HEAT_SINK_RUNAWAY);
+        assertThat(point.maxHeatLoadW()).isCloseTo(CoolerBruteForce.capacityAtObject(TM_A, weakSink)[0],
+                within(1e-6));
     }
 
     @Test
@@ -251,10 +282,74 @@ class OperatingPointSolverTest {
     }
 
     @Test
-    void warnsAboveMaxHotSide() {
+    void aHotFaceAboveTheStatedMaximumIsInfeasible() {
+        // the S10 point runs its hot face at about 303 K (check case S10), above a stated 300 K
         var limits = new DriveLimits(Double.NaN, Double.NaN, Double.NaN, 300);
-        Solved point = solved(solver.solve(TM_A, S10, limits));
-        assertThat(point.hasWarning(Warning.Code.HOT_SIDE_ABOVE_LIMIT)).isTrue();
+        Infeasible point = infeasible(solver.solve(TM_A, S10, limits));
+        assertThat(point.reason()).isEqualTo(Reason.HOT_SIDE_ABOVE_LIMIT);
+        assertThat(point.detail()).contains("stated maximum of 26.9 °C");
+    }
+
+    /**
+     * Object temperature at a fixed current, written here from the raw balances rather than the solver's
+     * 2x2 system: the cold face pumps the load, Q = S·I·Tc − ½I²R − K(Th − Tc), and the hot path carries the
+     * load plus the electrical power, Th = Tamb + Rh·(Q + I·(S(Th − Tc) + I·R)) (ideal equations, A.F. Ioffe,
+     * Semiconductor Thermoelements and Thermoelectric Cooling, 1957, from memory; first law). Linear in (Tc, Th).
+     */
+    private static double objectAtCurrentK(ModuleParameters m, CoolingCase c, double i) {
+        double s = m.seebeckVPerK();
+        double r = m.resistanceOhm();
+        double k = m.conductanceWPerK();
+        double rh = c.hotPathKPerW();
+        double q = c.heatLoadW();
+        // (S·I + K)·Tc − K·Th = Q + ½I²R;  Rh·S·I·Tc + (1 − Rh·S·I)·Th = Tamb + Rh·(Q + I²R)
+        double a11 = s * i + k;
+        double a12 = -k;
+        double a21 = rh * s * i;
+        double a22 = 1 - rh * s * i;
+        double b1 = q + 0.5 * i * i * r;
+        double b2 = c.ambientK() + rh * (q + i * i * r);
+        double tc = (b1 * a22 - a12 * b2) / (a11 * a22 - a12 * a21);
+        return tc + c.coldInterfaceKPerW() * q;
+    }
+
+    @Test
+    void theS10SetUpAt8AIsOverDrivenAndEndsWarmerThanTheAmbient() {
+        // The set-up of check case S10 driven at 8 A, beyond its 3.8 A capacity peak: the object settles at
+        // 311.64 K (the raw balances above), 13.5 K above the 298.15 K ambient; the warnings list was empty.
+        Solved point = solved(solver.atCurrent(ModuleArray.single(TM_A), S10, DriveLimits.NONE, 8));
+        assertThat(point.objectK()).isCloseTo(objectAtCurrentK(TM_A, S10, 8), within(1e-9))
+                .isCloseTo(311.64, within(0.005));
+        // more current warms it: the sign of dQc/dI < 0, seen on the raw balances
+        assertThat(objectAtCurrentK(TM_A, S10, 8.01)).isGreaterThan(objectAtCurrentK(TM_A, S10, 8));
+        assertThat(point.warnings()).extracting(Warning::code)
+                .contains(Warning.Code.OVER_DRIVEN, Warning.Code.OBJECT_ABOVE_AMBIENT);
+    }
+
+    @Test
+    void aCurrentBelowThePeakIsNotOverDriven() {
+        // at 2 A the S10 set-up still cools as current rises (raw balances) and stays below ambient
+        Solved point = solved(solver.atCurrent(ModuleArray.single(TM_A), S10, DriveLimits.NONE, 2));
+        assertThat(objectAtCurrentK(TM_A, S10, 2.01)).isLessThan(objectAtCurrentK(TM_A, S10, 2));
+        assertThat(point.warnings()).extracting(Warning::code)
+                .doesNotContain(Warning.Code.OVER_DRIVEN, Warning.Code.OBJECT_ABOVE_AMBIENT);
+    }
+
+    @Test
+    void theSetPointSolveIsNeverOverDriven() {
+        // the lower root lies left of the capacity peak (physics: the upper root is the over-driven one)
+        Solved point = solved(solver.solve(TM_A, S10, DriveLimits.NONE));
+        assertThat(point.warnings()).extracting(Warning::code).doesNotContain(Warning.Code.OVER_DRIVEN);
+    }
+
+    @Test
+    void hundredVoltsThroughA3KPerWHotPathIsInfeasibleNotThousandsOfKelvin() {
+        // The S10 set-up with a 3 K/W hot path (2.95 sink + 0.05 interface) at 100 V: the equations give a hot
+        // face near 3,380 K. A module without a stated maximum is allowed 250 °C (common practice, no source).
+        var weak = new CoolingCase(298.15, 298.15, 10, 2.95, 0.1, 0.05);
+        Infeasible point = infeasible(solver.atVoltage(ModuleArray.single(TM_A), weak, DriveLimits.NONE, 100));
+        assertThat(point.reason()).isEqualTo(Reason.HOT_SIDE_BEYOND_USE);
+        assertThat(point.detail()).contains("250.0 °C").contains("states no maximum");
     }
 
     @Test
@@ -263,6 +358,53 @@ class OperatingPointSolverTest {
         Solved point = solved(solver.solve(TM_A, S10.withRelativeHumidity(0.6), DriveLimits.NONE));
         assertThat(point.hasWarning(Warning.Code.CONDENSATION_RISK)).isTrue();
         assertThat(Units.celsiusFromKelvin(point.dewPointK())).isCloseTo(16.7, within(0.01));
+    }
+
+    @Test
+    void hotHumidAirOutsideTheMagnusFitStillWarnsAndSaysItIsExtrapolated() {
+        // 55 °C and 90 % RH: dew point 52.8 °C by the extrapolated Magnus form (52.82 °C by the ASHRAE 2017
+        // formulation, see DewPointMagnusTest); a 25 °C cold face is far below it. This used to be silent.
+        var tropical = new CoolingCase(Units.kelvinFromCelsius(25), Units.kelvinFromCelsius(55), 2, 0.3, 0, 0.05)
+                .withRelativeHumidity(0.9);
+        Solved point = solved(solver.solve(TM_A, tropical, DriveLimits.NONE));
+        assertThat(Units.celsiusFromKelvin(point.dewPointK())).isCloseTo(52.83, within(0.005));
+        assertThat(point.warnings()).filteredOn(w -> w.code() == Warning.Code.CONDENSATION_RISK).singleElement()
+                .satisfies(w -> assertThat(w.sentence()).contains("below the ambient dew point 52.8 °C")
+                        .contains("extrapolated"));
+    }
+
+    @Test
+    void aColdFaceBelowTheFrostPointWarnsWithTheFrostPoint() {
+        // 25 °C air at 10 % RH: dew point −8.76 °C, frost point −7.77 °C (ASHRAE 2017 via PsychroLib: −7.75 °C,
+        // see DewPointMagnusTest). A cold face at −8 °C is above the dew point but below the frost point.
+        var dry = new CoolingCase(Units.kelvinFromCelsius(-8), Units.kelvinFromCelsius(25), 1, 0.1, 0, 0)
+                .withRelativeHumidity(0.1);
+        Solved point = solved(solver.solve(TM_A, dry, DriveLimits.NONE));
+        assertThat(Units.celsiusFromKelvin(point.frostPointK())).isCloseTo(-7.77, within(0.005));
+        assertThat(point.warnings()).filteredOn(w -> w.code() == Warning.Code.FROST_RISK).singleElement()
+                .satisfies(w -> assertThat(w.sentence()).contains("below the ambient frost point -7.8 °C")
+                        .contains("ice"));
+    }
+
+    @Test
+    void anArrayAbove60VIsAShockHazard() {
+        // eight small modules in series (S 0.04 V/K, R 24 Ω, K 0.025 W/K each) on the S10 set-up: 11 W needs
+        // 63.3 V at the terminals, 10 W 55.8 V. 60 V DC: the usual extra-low-voltage limit for dry locations
+        // (common practice, no source).
+        var string = new ModuleArray(new ModuleParameters(0.04, 24, 0.025), 8, 1);
+        Solved high = solved(solver.solve(string, S10.withHeatLoadW(11), DriveLimits.NONE));
+        Solved low = solved(solver.solve(string, S10, DriveLimits.NONE));
+        assertThat(high.voltageV()).isGreaterThan(60);
+        assertThat(high.warnings()).filteredOn(w -> w.code() == Warning.Code.SHOCK_HAZARD_VOLTAGE).singleElement()
+                .satisfies(w -> assertThat(w.sentence()).contains("63.3 V").contains("local codes"));
+        assertThat(low.voltageV()).isLessThan(60);
+        assertThat(low.hasWarning(Warning.Code.SHOCK_HAZARD_VOLTAGE)).isFalse();
+    }
+
+    @Test
+    void aDewPointAboveFreezingHasNoFrostPoint() {
+        Solved point = solved(solver.solve(TM_A, S10.withRelativeHumidity(0.6), DriveLimits.NONE));
+        assertThat(point.frostPointK()).isNaN();
     }
 
     @Test
@@ -278,7 +420,7 @@ class OperatingPointSolverTest {
 
     @Test
     void splitsAnArrayIntoModuleShares() {
-        // Source: physics.md g: I per string, V per series position, heat per module.
+        // Source: circuit algebra of identical modules: I per string, V per series position, heat per module.
         var array = new ModuleArray(TM_A, 2, 3);
         var shared = new CoolingCase(278.15, 298.15, 30, 0.05, 0.02, 0.01);
         Solved point = solved(solver.solve(array, shared, DriveLimits.NONE));

@@ -12,7 +12,7 @@ class RatingsFitTest {
 
     @Test
     void detailedRatingsWithConstantPropertiesAreTheIdealForwardRelations() {
-        // Identity: physics.md b, forward relations (case S02) hold exactly with constant properties.
+        // Identity: the ideal rating relations derived from Ioffe's equations, see RatingsMethod, forward relations (case S02) hold exactly with constant properties.
         MaxRatings ideal = TM_A.ratingsAt(300);
         MaxRatings detailed = solver.ratingsAt(DetailedModule.ofConstantParameters(TM_A), 300);
         assertThat(detailed.dtmaxK()).isCloseTo(ideal.dtmaxK(), within(1e-6 * ideal.dtmaxK()));
@@ -35,7 +35,7 @@ class RatingsFitTest {
     @Test
     void fitsInventedCatalogueRatingsAndReportsTheResidualOfAnInconsistentQmax() {
         // Invented ratings (6 A, 15.4 V, 70 K at 300 K), once with Qmax implied by the ideal consistency
-        // relation (physics.md b) and once 10 % below it, which no single set of factors can match.
+        // relation (the ideal rating relations derived from Ioffe's equations, see RatingsMethod) and once 10 % below it, which no single set of factors can match.
         var ratings = MaxRatings.withoutQmax(6, 15.4, 70, 300);
         RatingsFit.Fitted three = new RatingsFit().fit(ratings, MaterialSet.BI2TE3_COUPLE_AVERAGE);
         assertThat(three.rmsResidual()).isLessThan(1e-6);

@@ -16,7 +16,7 @@ class RatingsRoundTripProperties {
                                          @ForAll @Scale(6) @DoubleRange(min = 0.05, max = 2) double k,
                                          @ForAll @Scale(6) @DoubleRange(min = 250, max = 400) double hotK,
                                          @ForAll boolean useQmax) {
-        // Source: forward and inverse ideal rating relations, physics.md b (derived there; case S03).
+        // Source: forward and inverse ideal rating relations (derived from the ideal equations; case S03).
         var m = new ModuleParameters(s, r, k);
         RatingsMethod method = useQmax ? RatingsMethod.QMAX_IMAX_DTMAX : RatingsMethod.IMAX_VMAX_DTMAX;
         ModuleParameters back = ModuleParameters.fromRatings(m.ratingsAt(hotK), method);

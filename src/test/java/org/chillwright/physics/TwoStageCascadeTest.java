@@ -23,7 +23,7 @@ class TwoStageCascadeTest {
 
     @Test
     void hotSideCarriesLoadPlusAllPower() {
-        // Source: energy conservation Qh2 = Qload + P1 + P2, physics.md h.
+        // Source: energy conservation Qh2 = Qload + P1 + P2, the cascade balance Qh1 = Qc2, derived from the ideal equations.
         CascadeSolved s = (CascadeSolved) CASCADE.atCurrents(2, 3, 250, 300);
         double qh2 = new ModuleParameters(0.04, 2.4, 0.25).hotSideHeatW(3, s.interstageK(), 300);
         assertThat(qh2).isCloseTo(s.heatRejectedW(), within(1e-9));

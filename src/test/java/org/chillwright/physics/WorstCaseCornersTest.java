@@ -23,7 +23,7 @@ class WorstCaseCornersTest {
 
     @Test
     void worstPartsLeaveLessMarginThanNominalPartsAtTheSameLoad() {
-        // Monotonic in each input (physics.md e): less S, more R, K and thermal resistance cost margin.
+        // Monotonic in each input (the heat-sink network of OperatingPointSolver): less S, more R, K and thermal resistance cost margin.
         double nominalParts = ((Solved) corners.get(2).cooling()).marginK();
         OperatingPoint worst = corners.get(1).cooling();
         if (worst instanceof Solved w) {

@@ -1,24 +1,27 @@
 package org.chillwright.selection;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
 import static org.assertj.core.api.Assertions.withinPercentage;
 
 import java.util.List;
+import org.chillwright.physics.CoolerBruteForce;
 import org.chillwright.physics.CoolingCase;
+import org.chillwright.physics.ModuleParameters;
 import org.chillwright.physics.Units;
 import org.junit.jupiter.api.Test;
 
 /**
- * Ranking on a small catalog where the answer can be checked by hand or against the shared check cases.
- * Module A is check-cases.json's synthetic TM-A (S 0.04 V/K, R 2.4 Ω, K 0.25 W/K); B has the same legs at
- * half the area (R doubled, K halved: physics.md c scaling, half the capacity); C is a tenth of A.
+ * Ranking on a small catalog where the answer can be checked by hand or against the check cases.
+ * Module A is the check cases' synthetic TM-A (S 0.04 V/K, R 2.4 Ω, K 0.25 W/K); B has the same legs at
+ * half the area (R doubled, K halved: leg-area scaling, half the capacity); C is a tenth of A.
  */
 class RankingEngineTest {
 
     private static final long A = 1, B = 2, C = 3;
     private final RankingEngine engine = new RankingEngine();
 
-    /** check-cases.json S10: 10 W from an object at 5 °C, 25 °C ambient, sink 0.3 K/W, interfaces 0.05 / 0.1 K/W. */
+    /** check case S10: 10 W from an object at 5 °C, 25 °C ambient, sink 0.3 K/W, interfaces 0.05 / 0.1 K/W. */
     private static CoolingCase s10(double loadW) {
         return new CoolingCase(Units.kelvinFromCelsius(5), Units.kelvinFromCelsius(25), loadW, 0.3, 0.1, 0.05);
     }
@@ -39,7 +42,7 @@ class RankingEngineTest {
         var ranking = engine.rank(table(CandidateTable.PriceBook.NONE), rankingCase(s10(10), 1, Objective.COP));
         var best = ranking.candidates().get(0);
         assertThat(best.moduleId()).isEqualTo(A);
-        // check-cases.json S10 (brute-force nested root finding on the raw equations): I 1.961596365 A, COP 0.8716659285
+        // check case S10 (brute-force nested root finding on the raw equations): I 1.961596365 A, COP 0.8716659285
         assertThat(best.point().currentA()).isCloseTo(1.961596365, withinPercentage(1e-4));
         assertThat(best.point().cop()).isCloseTo(0.8716659285, withinPercentage(1e-4));
     }
@@ -53,6 +56,37 @@ class RankingEngineTest {
         assertThat(ranking.infeasible()).allSatisfy(r -> {
             assertThat(r.code()).isEqualTo("LOAD_ABOVE_CAPACITY");
             assertThat(r.message()).contains("10.00 W");
+        });
+    }
+
+    @Test
+    void aModuleWhoseHotFacePassesItsStatedMaximumIsRefusedForThat() {
+        // A stated at 25 °C: every design runs its hot face above the 25 °C ambient, so none may be shown
+        var limited = new CandidateTable(new long[] {A}, new double[] {0.04}, new double[] {2.4},
+                new double[] {0.25}, new double[] {3.8}, new double[] {70}, new double[] {Units.kelvinFromCelsius(25)},
+                CandidateTable.PriceBook.NONE);
+        var ranking = engine.rank(limited, rankingCase(s10(10), 2, Objective.COP));
+        assertThat(ranking.candidates()).isEmpty();
+        assertThat(ranking.infeasible()).singleElement().satisfies(r -> assertThat(r.code())
+                .isEqualTo("HOT_SIDE_ABOVE_LIMIT"));
+    }
+
+    @Test
+    void aRefusedModuleCarriesTheCapacityOfTheDesignItsReasonNames() {
+        // B (R 4.8 Ω, K 0.125 W/K) and C (R 24 Ω, K 0.025 W/K) alone cannot take 10 W at 5 °C; how much they can
+        // is the brute-force capacity of the raw balances (CoolerBruteForce), not the solver's own number
+        var ranking = engine.rank(table(CandidateTable.PriceBook.NONE), rankingCase(s10(10), 1, Objective.COP));
+        double[] b = CoolerBruteForce.capacityAtObject(new ModuleParameters(0.04, 4.8, 0.125), s10(10));
+        double[] c = CoolerBruteForce.capacityAtObject(new ModuleParameters(0.04, 24, 0.025), s10(10));
+        assertThat(ranking.infeasible()).extracting(Ranking.Rejection::maxHeatLoadW)
+                .satisfiesExactly(w -> assertThat(w).isCloseTo(b[0], within(1e-6)),
+                        w -> assertThat(w).isCloseTo(c[0], within(1e-6)));
+        assertThat(ranking.infeasible()).extracting(Ranking.Rejection::currentAtMaxHeatLoadA)
+                .satisfiesExactly(i -> assertThat(i).isCloseTo(b[1], within(1e-4)),
+                        i -> assertThat(i).isCloseTo(c[1], within(1e-4)));
+        assertThat(ranking.infeasible()).allSatisfy(r -> {
+            assertThat(r.seriesCount()).isEqualTo(1);
+            assertThat(r.parallelCount()).isEqualTo(1);
         });
     }
 

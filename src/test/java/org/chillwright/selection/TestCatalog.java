@@ -13,7 +13,7 @@ import org.chillwright.physics.RatingsMethod;
 
 /**
  * A small invented catalog whose best answer can be checked by hand. TMA-1 carries the ideal ratings of
- * check-cases.json's synthetic module TM-A at 300 K (S02), so it derives back to S 0.04 V/K, R 2.4 Ω,
+ * the check cases' synthetic module TM-A at 300 K (S02), so it derives back to S 0.04 V/K, R 2.4 Ω,
  * K 0.25 W/K (S03); TMA-HALF has half its leg area (half the Imax and Qmax), TMA-TINY a tenth.
  */
 public final class TestCatalog {
@@ -40,7 +40,7 @@ public final class TestCatalog {
         add(catalog, SUPPLIER_A, "TMA-OLD", 1, Lifecycle.OBSOLETE, "9.00");
     }
 
-    /** TM-A with its legs' area scaled: Imax, Qmax scale with area, Vmax and ΔTmax do not (physics.md c). */
+    /** TM-A with its legs' area scaled: Imax, Qmax scale with area, Vmax and ΔTmax do not (Goldsmid 2016, from memory). */
     private static void add(CatalogService catalog, String supplier, String partNumber, double areaScale,
                             Lifecycle lifecycle, String price) {
         var ratings = new RatedInputs(TM_A_IMAX_A * areaScale, TM_A_VMAX_V, TM_A_QMAX_W * areaScale, TM_A_DTMAX_K,

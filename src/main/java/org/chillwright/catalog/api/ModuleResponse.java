@@ -11,7 +11,7 @@ import org.chillwright.catalog.ModuleDefinition;
 import org.chillwright.catalog.ModuleSpec;
 import org.chillwright.catalog.RatedInputs;
 
-/** The module JSON of DESIGN.md: what was entered, purchasing data, and what the physics engine derives. */
+/** The module JSON of the HTTP contract: what was entered, purchasing data, and what the physics engine derives. */
 @JsonInclude(JsonInclude.Include.NON_NULL)
 public record ModuleResponse(long id, long version, String supplier, String partNumber, String description,
                              EntryRoute route, RatedInputs ratings, ConstructionInputs construction,

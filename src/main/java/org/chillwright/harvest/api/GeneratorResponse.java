@@ -1,6 +1,11 @@
 package org.chillwright.harvest.api;
 
-/** A generator's point on the chosen (or best) load, and its optima. SI with °C. */
+import java.util.List;
+
+/**
+ * A generator's point on the chosen (or best) load, and its optima. SI with °C. {@code maxHotSideC} is null
+ * when the module states no maximum temperature (then the warnings say that the limit is unchecked).
+ */
 public record GeneratorResponse(
         double openCircuitV,
         double loadOhm,
@@ -14,5 +19,12 @@ public record GeneratorResponse(
         double maxPowerW,
         double maxPowerLoadOhm,
         double maxEfficiency,
-        double maxEfficiencyLoadOhm) {
+        double maxEfficiencyLoadOhm,
+        double openCircuitHotJunctionC,
+        Double maxHotSideC,
+        List<WarningJson> warnings) {
+
+    /** A risk of the design: a stable code and a sentence with the numbers. */
+    public record WarningJson(String code, String message) {
+    }
 }

@@ -47,7 +47,8 @@ class HarvestApiController {
                     p.voltageV(), p.powerW(), p.efficiency(), celsius(p.hotJunctionK()), celsius(p.coldJunctionK()),
                     p.heatInW(), d.atMaxEfficiency().efficiency(), d.atMaxEfficiency().loadOhm(),
                     celsius(d.openCircuitHotJunctionK()), number(celsius(d.maxHotSideK())), number(d.unitPrice()),
-                    number(d.arrayCost()), number(d.costPerW()), row.currency());
+                    number(d.arrayCost()), number(d.costPerW()), row.currency(), d.warnings().stream()
+                            .map(w -> new GeneratorResponse.WarningJson(w.code().name(), w.sentence())).toList());
         }).toList();
         var refused = result.infeasible().stream().map(r -> new HarvestRankingResponse.Refused(r.moduleId(),
                 r.partNumber(), r.supplier(), new HarvestRankingResponse.Reason(r.code(), r.message()))).toList();

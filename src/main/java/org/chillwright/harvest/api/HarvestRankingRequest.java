@@ -17,8 +17,8 @@ import org.chillwright.harvest.HarvestObjective;
  * Obsolete modules are left out unless {@code lifecycles} asks for them.
  */
 public record HarvestRankingRequest(
-        @NotNull @DecimalMin(value = "-273.15", inclusive = false) @DecimalMax("1000") Double hotSourceC,
-        @NotNull @DecimalMin(value = "-273.15", inclusive = false) @DecimalMax("1000") Double coldSinkC,
+        @NotNull @DecimalMin(value = "-273.15", inclusive = false) @DecimalMax("1500") Double hotSourceC,
+        @NotNull @DecimalMin(value = "-273.15", inclusive = false) @DecimalMax("1500") Double coldSinkC,
         @NotNull @PositiveOrZero @DecimalMax("1000") Double hotResistanceKPerW,
         @NotNull @PositiveOrZero @DecimalMax("1000") Double coldResistanceKPerW,
         @Min(1) @Max(8) Integer maxModules,

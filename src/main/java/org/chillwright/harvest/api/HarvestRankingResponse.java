@@ -8,14 +8,16 @@ public record HarvestRankingResponse(List<Candidate> candidates, List<Refused> i
 
     /**
      * One design on its best-power load; whole-array values at its terminals. {@code maxHotSideC} and the
-     * prices are null when unknown.
+     * prices are null when unknown; {@code warnings} flag a module without a stated maximum temperature
+     * (HOT_SIDE_LIMIT_UNCHECKED) and an open-circuit voltage above 60 V DC (SHOCK_HAZARD_VOLTAGE).
      */
     public record Candidate(int rank, long moduleId, String partNumber, String supplier, String lifecycle,
                             int seriesCount, int parallelCount, double openCircuitV, double loadOhm,
                             double currentA, double voltageV, double powerW, double efficiency,
                             double hotJunctionC, double coldJunctionC, double heatInW, double maxEfficiency,
                             double maxEfficiencyLoadOhm, double openCircuitHotJunctionC, Double maxHotSideC,
-                            Double unitPrice, Double arrayCost, Double costPerW, String currency) {
+                            Double unitPrice, Double arrayCost, Double costPerW, String currency,
+                            List<GeneratorResponse.WarningJson> warnings) {
     }
 
     /** A module that has no design that works. */

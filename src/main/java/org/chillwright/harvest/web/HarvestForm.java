@@ -37,8 +37,11 @@ public record HarvestForm(
         @Min(1) @Max(10_000_000) Integer costQuantity,
         @Min(1) @Max(500) Integer limit) {
 
-    /** Hottest source the pages accept, °C: beyond this no bismuth-telluride module survives (common practice, no source). */
-    static final double HOTTEST_SOURCE_C = 1000;
+    /**
+     * Hottest source the pages accept, °C, as the API: exhaust, furnace and stove generators with materials other
+     * than bismuth telluride see such sources. Whether a module survives is the design's warning, not a refusal.
+     */
+    static final double HOTTEST_SOURCE_C = 1500;
     static final int DEFAULT_MAX_MODULES = 4;
     static final int DEFAULT_LIMIT = 50;
 

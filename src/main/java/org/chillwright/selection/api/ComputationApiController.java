@@ -39,7 +39,7 @@ class ComputationApiController {
     private final ModuleResolver modules;
     /** Hot side at which a module without ratings is restated when none is asked for, °C (common practice). */
     private static final double DEFAULT_RATING_HOT_SIDE_C = 25;
-    /** ZT is quoted at 300 K by convention (physics.md d). */
+    /** ZT is quoted at 300 K by convention (common practice, no source). */
     private static final double ZT_REFERENCE_K = 300;
     private static final int COOLDOWN_CURVE_POINTS = 60;
     /** The cool-down curve runs to five time constants (within 1 % of the final value) or the asked time. */
@@ -159,12 +159,21 @@ class ComputationApiController {
     }
 
     @GetMapping("/dew-point")
-    @Operation(summary = "Dew point of air (Magnus form, Alduchov and Eskridge 1996)")
+    @Operation(summary = "Dew point of air, and its frost point when the dew point is below 0 °C",
+            description = "Magnus form over water and over ice (Alduchov and Eskridge 1996); relative humidity with "
+                    + "respect to water. Fitted for air from -40 to 50 °C; from -100 to 200 °C the values are "
+                    + "extrapolated and the answer says so (above 50 °C the extrapolated dew point errs high).")
     DewPointResponse dewPoint(
-            @RequestParam @NotNull @DecimalMin("-40") @DecimalMax("50") Double airC,
+            @RequestParam @NotNull @DecimalMin("-100") @DecimalMax("200") Double airC,
             @RequestParam @NotNull @DecimalMin(value = "0", inclusive = false) @DecimalMax("100")
             Double relativeHumidityPct) {
-        return new DewPointResponse(dewPoint.dewPointC(airC, Units.fractionFromPercent(relativeHumidityPct)));
+        double relativeHumidity = Units.fractionFromPercent(relativeHumidityPct);
+        double dewPointC = dewPoint.dewPointC(airC, relativeHumidity);
+        Double frostPointC = dewPointC < 0 ? dewPoint.frostPointC(airC, relativeHumidity) : null;
+        boolean extrapolated = !dewPoint.withinFit(airC);
+        String note = extrapolated ? "the air temperature is outside the -40 to 50 °C range of the Magnus fit: "
+                + "extrapolated values; allow a wider margin" : null;
+        return new DewPointResponse(dewPointC, frostPointC, extrapolated, note);
     }
 
     private ModuleParameters stage(CascadeRequest.Stage stage, String field) {

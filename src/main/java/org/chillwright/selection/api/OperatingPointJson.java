@@ -19,9 +19,11 @@ final class OperatingPointJson {
             return solved(s, seriesCount, parallelCount);
         }
         var i = (Infeasible) point;
+        // the capacity at the set-point stays, so a script sees how far off the design is
         return new OperatingPointResponse(false, new OperatingPointResponse.ReasonJson(i.reason().name(), i.detail()),
-                null, null, null, null, null, null, null, null, null, null, null, null, null, null, null, null,
-                null, List.of(), null, seriesCount, parallelCount);
+                null, null, null, null, null, null, null, null, null, null,
+                number(i.maxHeatLoadW()), number(i.currentAtMaxHeatLoadA()), null, null, null, null,
+                null, null, List.of(), null, seriesCount, parallelCount);
     }
 
     private static OperatingPointResponse solved(Solved s, int seriesCount, int parallelCount) {
@@ -33,6 +35,7 @@ final class OperatingPointJson {
                 number(s.maxHeatLoadW()), number(s.currentAtMaxHeatLoadA()), number(s.loadMarginPct()),
                 number(s.marginK()), number(s.copOptimalCurrentA()), number(s.maxCop()),
                 Double.isNaN(s.dewPointK()) ? null : celsius(s.dewPointK()),
+                Double.isNaN(s.frostPointK()) ? null : celsius(s.frostPointK()),
                 s.warnings().stream()
                         .map(w -> new OperatingPointResponse.WarningJson(w.code().name(), w.sentence())).toList(),
                 new OperatingPointResponse.PerModule(share.currentA(), share.voltageV(), share.heatLoadW(),

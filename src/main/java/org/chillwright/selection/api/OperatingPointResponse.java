@@ -26,6 +26,7 @@ public record OperatingPointResponse(
         Double copOptimalCurrentA,
         Double maxCop,
         Double dewPointC,
+        Double frostPointC,
         List<WarningJson> warnings,
         PerModule perModule,
         int seriesCount,

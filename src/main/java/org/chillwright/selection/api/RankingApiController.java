@@ -49,7 +49,8 @@ class RankingApiController {
                     OperatingPointJson.of(design.point(), design.seriesCount(), design.parallelCount()));
         }).toList();
         var refused = result.infeasible().stream().map(r -> new RankingResponse.Refused(r.moduleId(), r.partNumber(),
-                r.supplier(), new OperatingPointResponse.ReasonJson(r.code(), r.message()))).toList();
+                r.supplier(), new OperatingPointResponse.ReasonJson(r.code(), r.message()), r.seriesCount(),
+                r.parallelCount(), number(r.maxHeatLoadW()), number(r.currentAtMaxHeatLoadA()))).toList();
         return new RankingResponse(candidates, refused, result.feasible(), result.evaluated(), result.elapsedMs(),
                 result.catalogRevision());
     }

@@ -22,7 +22,12 @@ public record RankingResponse(List<Candidate> candidates, List<Refused> infeasib
                           Double voltageV, Double powerW, Double copHeating, double heatNeededW) {
     }
 
-    /** A module that has no design that works. */
-    public record Refused(long moduleId, String partNumber, String supplier, OperatingPointResponse.ReasonJson reason) {
+    /**
+     * A module that has no design that works: the reason, the design it names, and that design's capacity at the
+     * set-point ({@code maxHeatLoadW}, {@code currentAtMaxHeatLoadA}; null when not known), so a script sees how
+     * far off it is.
+     */
+    public record Refused(long moduleId, String partNumber, String supplier, OperatingPointResponse.ReasonJson reason,
+                          int seriesCount, int parallelCount, Double maxHeatLoadW, Double currentAtMaxHeatLoadA) {
     }
 }

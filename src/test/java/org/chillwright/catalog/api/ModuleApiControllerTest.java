@@ -91,7 +91,7 @@ class ModuleApiControllerTest {
                 .andExpect(jsonPath("$.ratings.imaxA").value(6.0))
                 .andExpect(jsonPath("$.prices[1].unitPrice").value(9.85))
                 .andExpect(jsonPath("$.prices[1].currency").value("EUR"))
-                // S = Vmax/Th (physics.md b, eq. i) = 15.4/298.15
+                // S = Vmax/Th (Vmax = S·Th, the ideal rating relations) = 15.4/298.15
                 .andExpect(jsonPath("$.derived.seebeckVPerK").value(org.hamcrest.Matchers.closeTo(0.051652, 1e-6), Double.class))
                 .andExpect(jsonPath("$.derived.ratingsConsistency").exists())
                 .andExpect(jsonPath("$.derived.ratingsAt[1].hotSideC").value(50.0))
@@ -107,7 +107,7 @@ class ModuleApiControllerTest {
         mvc.perform(post("/api/v1/modules").with(engineer()).contentType(MediaType.APPLICATION_JSON).content(body))
                 .andExpect(status().isCreated())
                 .andExpect(jsonPath("$.route").value("CONSTRUCTION"))
-                // S = N(αp − αn) (physics.md c) = 71 × 395 µV/K
+                // S = N(αp − αn) (Goldsmid 2016, from memory) = 71 × 395 µV/K
                 .andExpect(jsonPath("$.derived.seebeckVPerK").value(org.hamcrest.Matchers.closeTo(0.028045, 1e-9), Double.class))
                 .andExpect(jsonPath("$.derived.listed.hotSideC").value(25.0));
     }

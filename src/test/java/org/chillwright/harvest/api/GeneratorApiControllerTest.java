@@ -5,19 +5,28 @@ import static org.springframework.test.web.servlet.request.MockMvcRequestBuilder
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import org.chillwright.catalog.CatalogService;
+import org.chillwright.catalog.ModuleQuery;
+import org.chillwright.harvest.HarvestTestCatalog;
 import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.springframework.http.HttpStatus;
 import org.springframework.http.MediaType;
 import org.springframework.test.web.servlet.MockMvc;
+import org.springframework.test.web.servlet.assertj.MockMvcTester;
+import org.springframework.test.web.servlet.assertj.MvcTestResult;
 
 /**
  * Generator mode through JSON. With zero heat-exchanger resistances the junctions sit at the source and
- * sink temperatures, so check-cases.json S13 applies (Ioffe 1957; Rowe, CRC Handbook of Thermoelectrics
+ * sink temperatures, so check case S13 applies (Ioffe 1957; Rowe, CRC Handbook of Thermoelectrics
  * 1995, from memory; expected values by brute-force maximisation over the load).
  */
-@SpringBootTest
+@SpringBootTest(properties = HarvestTestCatalog.OWN_DATABASE)
 @AutoConfigureMockMvc
 class GeneratorApiControllerTest {
 
@@ -25,6 +34,70 @@ class GeneratorApiControllerTest {
 
     @Autowired
     MockMvc mvc;
+    @Autowired
+    MockMvcTester tester;
+    @Autowired
+    CatalogService catalog;
+
+    private MvcTestResult generator(String module, String fields) {
+        return tester.post().uri("/api/v1/generator/operating-point").contentType(MediaType.APPLICATION_JSON)
+                .content("{\"module\":" + module + ",\"coldSinkC\":30,\"hotResistanceKPerW\":0.5,"
+                        + "\"coldResistanceKPerW\":0.5" + fields + "}")
+                .exchange();
+    }
+
+    @Test
+    void acceptsAFurnaceSourceOf1200CAndSaysTheLimitOfAnUnratedModuleIsUnchecked() {
+        // Open circuit: ΔT = (1200 − 30)/(1 + (0.5 + 0.5)·0.25) = 936 K, Th = 1200 − 0.5·0.25·936 = 1083.0 °C
+        // (the node balances at I = 0, hand arithmetic). Refused with a 400 before: the limit was 400 °C.
+        var result = generator(TM_A, ",\"hotSourceC\":1200");
+        assertThat(result).hasStatusOk().bodyJson().extractingPath("$.warnings[*].code").asArray()
+                .contains("HOT_SIDE_LIMIT_UNCHECKED");
+        assertThat(result).bodyJson().extractingPath("$.openCircuitHotJunctionC").asNumber().satisfies(
+                c -> assertThat(c.doubleValue()).isCloseTo(1083.0, within(1e-9)));
+        assertThat(result).bodyJson().extractingPath("$.maxHotSideC").isNull();
+    }
+
+    @Test
+    void aHotJunctionAboveTheStatedMaximumIsWarnedAboutNotRefused() {
+        // 600 °C source: open-circuit hot face 600 − 0.125·570/1.25 = 543.0 °C, above the stated 200 °C
+        var module = TM_A.replace("}", ",\"maxOperatingC\":200}");
+        var result = generator(module, ",\"hotSourceC\":600");
+        assertThat(result).hasStatusOk().bodyJson().extractingPath("$.warnings[*].code").asArray()
+                .containsExactly("HOT_SIDE_ABOVE_LIMIT");
+        assertThat(result).bodyJson().extractingPath("$.powerW").asNumber().satisfies(
+                p -> assertThat(p.doubleValue()).isPositive());
+    }
+
+    @Test
+    void aSourceAbove1500CIsA400NamingIt() {
+        assertThat(generator(TM_A, ",\"hotSourceC\":1501")).hasStatus(HttpStatus.BAD_REQUEST).bodyJson()
+                .extractingPath("$.errors[*].field").asArray().contains("hotSourceC");
+    }
+
+    @Test
+    void aCatalogModuleKeepsItsOwnMaximumTemperature() {
+        HarvestTestCatalog.ensure(catalog);
+        long id = catalog.search(ModuleQuery.text("HRV-COOL")).items().get(0).id();
+        assertThat(generator("{\"moduleId\":" + id + ",\"maxOperatingC\":300}", ",\"hotSourceC\":90"))
+                .hasStatus(HttpStatus.BAD_REQUEST).bodyJson().extractingPath("$.errors[*].field").asArray()
+                .contains("module.maxOperatingC");
+    }
+
+    @Test
+    void anArrayAbove60VOpenCircuitIsAShockHazard() {
+        // eight TM-A in series given as one module (S 0.32 V/K, R 19.2 Ω, K 2 W/K) between junctions held at
+        // 330 °C and 30 °C: Voc = S·ΔT = 0.32 V/K × 300 K = 96 V, above 60 V DC (common practice, no source)
+        var array = "{\"seebeckVPerK\":0.32,\"resistanceOhm\":19.2,\"conductanceWPerK\":2.0}";
+        var result = tester.post().uri("/api/v1/generator/operating-point").contentType(MediaType.APPLICATION_JSON)
+                .content("{\"module\":" + array + ",\"hotSourceC\":330,\"coldSinkC\":30,"
+                        + "\"hotResistanceKPerW\":0,\"coldResistanceKPerW\":0}")
+                .exchange();
+        assertThat(result).hasStatusOk().bodyJson().extractingPath("$.warnings[*].code").asArray()
+                .contains("SHOCK_HAZARD_VOLTAGE");
+        assertThat(result).bodyJson().extractingPath("$.openCircuitV").asNumber().satisfies(
+                v -> assertThat(v.doubleValue()).isCloseTo(96.0, within(1e-9)));
+    }
 
     @Test
     void idealHeatExchangersGiveTheMatchedLoadAndMaximumEfficiencyOfS13() throws Exception {

@@ -32,7 +32,7 @@ class HarvestApiControllerTest {
         HarvestTestCatalog.ensure(catalog);
     }
 
-    /** The harvest test modules between 100 °C and 30 °C junctions (check-cases.json S13), with overrides. */
+    /** The harvest test modules between 100 °C and 30 °C junctions (check case S13), with overrides. */
     private MvcTestResult rank(String fields) {
         String body = "{\"hotSourceC\":100,\"coldSinkC\":30,\"hotResistanceKPerW\":0,\"coldResistanceKPerW\":0,"
                 + "\"maxModules\":1,\"supplier\":\"" + HarvestTestCatalog.SUPPLIER + "\"" + fields + "}";
@@ -47,7 +47,7 @@ class HarvestApiControllerTest {
 
     @Test
     void bestDesignGivesTheMatchedPowerOfCheckCaseS13() throws Exception {
-        // check-cases.json S13 (Ioffe 1957; Rowe, CRC Handbook 1995, from memory): P_max = Voc²/4R = 0.8166666667 W
+        // check case S13 (Ioffe 1957; Rowe, CRC Handbook 1995, from memory): P_max = Voc²/4R = 0.8166666667 W
         var result = rank("");
         assertThat(result).hasStatusOk();
         assertThat(number(result, "$.candidates[0].powerW")).isCloseTo(0.8166666667, within(1e-6));
@@ -55,13 +55,13 @@ class HarvestApiControllerTest {
 
     @Test
     void bestDesignRunsOnTheInternalResistanceWithIdealExchangers() throws Exception {
-        // check-cases.json S13: RL = R = 2.4 Ω; the flat optimum pins the load to about 1e-4 Ω
+        // check case S13: RL = R = 2.4 Ω; the flat optimum pins the load to about 1e-4 Ω
         assertThat(number(rank(""), "$.candidates[0].loadOhm")).isCloseTo(2.4, within(1e-3));
     }
 
     @Test
     void eachCandidateCarriesItsOpenCircuitVoltageAndJunctionsInCelsius() throws Exception {
-        // check-cases.json S13: Voc = S·ΔT = 0.04 · 70 = 2.8 V; the junctions are the source and sink
+        // check case S13: Voc = S·ΔT = 0.04 · 70 = 2.8 V; the junctions are the source and sink
         var result = rank("");
         assertThat(number(result, "$.candidates[0].openCircuitV")).isCloseTo(2.8, within(1e-6));
         assertThat(number(result, "$.candidates[0].hotJunctionC")).isCloseTo(100, within(1e-6));
@@ -77,10 +77,43 @@ class HarvestApiControllerTest {
     @Test
     void moduleThatWouldRunAboveItsLimitIsRefusedWithItsReason() {
         // 150 °C source through 0.5 K/W: one TM-A's hot face reaches 138 °C open-circuit (hand arithmetic,
-        // physics.md i at I = 0), above HRV-COOL's 80 °C
+        // the node balances at I = 0), above HRV-COOL's 80 °C
         var result = rank(",\"hotSourceC\":150,\"hotResistanceKPerW\":0.5,\"coldResistanceKPerW\":0.5");
         assertThat(result).hasStatusOk().bodyJson().extractingPath("$.infeasible[?(@.partNumber=='HRV-COOL')].reason.code")
                 .asArray().containsExactly("HOT_SIDE_ABOVE_LIMIT");
+    }
+
+    @Test
+    void acceptsSourcesUpTo1500CAndRanksTheModuleWithoutALimitWithItsWarning() {
+        // 1,500 °C: furnace and stove generators; refused with a 400 before (the limit was 1,000 °C). The modules
+        // rated 80 °C and 200 °C are refused for their hot face; HRV-HALF states no limit and is ranked, flagged.
+        var result = rank(",\"hotSourceC\":1500,\"hotResistanceKPerW\":0.5,\"coldResistanceKPerW\":0.5");
+        assertThat(result).hasStatusOk().bodyJson().extractingPath("$.candidates[*].partNumber").asArray()
+                .containsOnly("HRV-HALF");
+        assertThat(result).bodyJson().extractingPath("$.candidates[0].warnings[*].code").asArray()
+                .contains("HOT_SIDE_LIMIT_UNCHECKED");
+    }
+
+    @Test
+    void aSourceAbove1500CIsA400NamingIt() {
+        assertThat(rank(",\"hotSourceC\":1501")).hasStatus(HttpStatus.BAD_REQUEST).bodyJson()
+                .extractingPath("$.errors[*].field").asArray().contains("hotSourceC");
+    }
+
+    @Test
+    void everyDesignOfAModuleWithoutAStatedMaximumIsFlagged() throws Exception {
+        var result = rank(",\"maxModules\":4");
+        assertThat(result).hasStatusOk();
+        String body = result.getResponse().getContentAsString(java.nio.charset.StandardCharsets.UTF_8);
+        java.util.List<Object> unrated = com.jayway.jsonpath.JsonPath.read(body,
+                "$.candidates[?(@.partNumber=='HRV-HALF')]");
+        java.util.List<Object> flagged = com.jayway.jsonpath.JsonPath.read(body,
+                "$.candidates[?(@.partNumber=='HRV-HALF')].warnings[?(@.code=='HOT_SIDE_LIMIT_UNCHECKED')]");
+        java.util.List<Object> ratedFlagged = com.jayway.jsonpath.JsonPath.read(body,
+                "$.candidates[?(@.partNumber=='HRV-A')].warnings[?(@.code=='HOT_SIDE_LIMIT_UNCHECKED')]");
+        assertThat(unrated).hasSize(8); // 1 to 4 modules: 1×1, 1×2, 2×1, 1×3, 3×1, 1×4, 2×2, 4×1
+        assertThat(flagged).hasSameSizeAs(unrated);
+        assertThat(ratedFlagged).isEmpty();
     }
 
     @Test

@@ -31,7 +31,7 @@ class HarvestPagesTest {
     }
 
     /**
-     * check-cases.json S13 typed into the form: junctions held at 100 °C and 30 °C (no heat-exchanger
+     * check case S13 typed into the form: junctions held at 100 °C and 30 °C (no heat-exchanger
      * resistance), one module, the harvest test supplier only; any field replaced by {@code overrides}.
      */
     private MvcTestResult s13(String path, String... overrides) {
@@ -71,13 +71,31 @@ class HarvestPagesTest {
     }
 
     @Test
+    void theFormCarriesTheBurnAndFireCautions() {
+        assertThat(mvc.get().uri("/harvest")).hasStatusOk().bodyText().contains("Burns and fire")
+                .contains("burn on touch").contains("ignite").contains("local codes");
+    }
+
+    @Test
+    void theRankingCarriesTheBurnAndFireCautions() {
+        assertThat(s13("/harvest/rank")).hasStatusOk().bodyText().contains("Burns and fire")
+                .contains("burn on touch").contains("ignite");
+    }
+
+    @Test
+    void theDesignCarriesTheBurnAndFireCautions() {
+        assertThat(s13("/harvest/design", "moduleId", String.valueOf(moduleId("HRV-A")))).hasStatusOk().bodyText()
+                .contains("Burns and fire").contains("ignite");
+    }
+
+    @Test
     void navigationLeadsToTheHarvestPage() {
         assertThat(mvc.get().uri("/")).hasStatusOk().bodyText().contains("href=\"/harvest\"");
     }
 
     @Test
     void rankingListsTheActiveModulesWithTheirMatchedPower() {
-        // check-cases.json S13: P_max = Voc²/4R = 0.8167 W for TM-A (HRV-A), shown as 817 mW
+        // check case S13: P_max = Voc²/4R = 0.8167 W for TM-A (HRV-A), shown as 817 mW
         assertThat(s13("/harvest/rank")).hasStatusOk().bodyText().contains("HRV-A").contains("817 mW")
                 .contains("designs evaluated").doesNotContain("HRV-OLD");
     }
@@ -91,7 +109,7 @@ class HarvestPagesTest {
 
     @Test
     void rankingExplainsAModuleThatWouldRunTooHot() {
-        // 150 °C through 0.5 K/W: 138 °C open-circuit hot face (physics.md i at I = 0) above HRV-COOL's 80 °C
+        // 150 °C through 0.5 K/W: 138 °C open-circuit hot face (the node balances at I = 0) above HRV-COOL's 80 °C
         assertThat(s13("/harvest/rank", "hotSource", "150", "hotResistanceKPerW", "0.5", "coldResistanceKPerW", "0.5"))
                 .hasStatusOk().bodyText().contains("Modules that cannot do this job").contains("HRV-COOL")
                 .contains("HOT_SIDE_ABOVE_LIMIT").contains("138.0 °C");
@@ -106,7 +124,7 @@ class HarvestPagesTest {
 
     @Test
     void designPageShowsTheOperatingPointOfCheckCaseS13() {
-        // check-cases.json S13: Voc 2.8 V, V 1.4 V and P 0.8167 W at the matched load
+        // check case S13: Voc 2.8 V, V 1.4 V and P 0.8167 W at the matched load
         assertThat(s13("/harvest/design", "moduleId", String.valueOf(moduleId("HRV-A")))).hasStatusOk().bodyText()
                 .contains("2.800 V").contains("1.400 V").contains("817 mW");
     }
@@ -133,6 +151,26 @@ class HarvestPagesTest {
     void sourceNoWarmerThanTheSinkIsShownBesideTheSourceField() {
         assertThat(s13("/harvest/rank", "hotSource", "20")).hasStatusOk().bodyText()
                 .contains("the source must be warmer than the sink").contains("href=\"#hotSource\"");
+    }
+
+    @Test
+    void aFurnaceSourceOf1200CIsRankedAndTheUnratedModuleIsFlagged() {
+        // refused beside the field before ("at most 1000.0 °C"); now up to 1,500 °C as on the API
+        assertThat(s13("/harvest/rank", "hotSource", "1200", "hotResistanceKPerW", "0.5", "coldResistanceKPerW",
+                "0.5")).hasStatusOk().bodyText().contains("designs evaluated").contains("HRV-HALF")
+                .contains("HOT_SIDE_LIMIT_UNCHECKED");
+    }
+
+    @Test
+    void aSourceAbove1500CIsShownBesideTheSourceField() {
+        assertThat(s13("/harvest/rank", "hotSource", "1600")).hasStatusOk().bodyText()
+                .contains("the source must be at most 1500").contains("href=\"#hotSource\"");
+    }
+
+    @Test
+    void designOfAModuleWithoutAStatedLimitCarriesTheUncheckedWarning() {
+        assertThat(s13("/harvest/design", "moduleId", String.valueOf(moduleId("HRV-HALF")))).hasStatusOk()
+                .bodyText().contains("HOT_SIDE_LIMIT_UNCHECKED").contains("is unchecked");
     }
 
     @Test

@@ -20,15 +20,15 @@ import org.springframework.test.web.servlet.MockMvc;
 import org.springframework.test.web.servlet.ResultActions;
 
 /**
- * The computation endpoints, end to end through JSON. Expected numbers are the shared external check
- * cases (check-cases.json, computed independently by brute force on the raw equations, or the cited
+ * The computation endpoints, end to end through JSON. Expected numbers are the external check cases
+ * (src/test/resources/check-cases.json: computed independently by brute force on the raw equations, or the cited
  * formula), entered here at the API's edge units (°C = K − 273.15).
  */
 @SpringBootTest
 @AutoConfigureMockMvc
 class ComputationApiControllerTest {
 
-    /** Synthetic module TM-A of check-cases.json: S = 0.04 V/K, R = 2.4 Ω, K = 0.25 W/K. */
+    /** Synthetic module TM-A of the check cases: S = 0.04 V/K, R = 2.4 Ω, K = 0.25 W/K. */
     private static final String TM_A = "{\"seebeckVPerK\":0.04,\"resistanceOhm\":2.4,\"conductanceWPerK\":0.25}";
     private static final String S10_CASE = "\"objectC\":5,\"ambientC\":25,\"heatLoadW\":%s,\"sinkResistanceKPerW\":0.3,"
             + "\"hotInterfaceKPerW\":0.05,\"coldInterfaceKPerW\":0.1";
@@ -45,7 +45,7 @@ class ComputationApiControllerTest {
 
     @Test
     void operatingPointMatchesCheckCaseS10() throws Exception {
-        // check-cases.json S10: brute-force nested root finding on the raw equations, rel 1e-6
+        // check case S10: brute-force nested root finding on the raw equations, rel 1e-6
         post("/api/v1/operating-point", "{\"module\":" + TM_A + "," + S10_CASE.formatted(10) + "}")
                 .andExpect(status().isOk())
                 .andExpect(jsonPath("$.feasible").value(true))
@@ -65,7 +65,7 @@ class ComputationApiControllerTest {
 
     @Test
     void loadAboveCapacityIsInfeasibleWithItsReason() throws Exception {
-        // check-cases.json S11: 25 W cannot be removed; the achievable peak is about 14.1 W
+        // check case S11: 25 W cannot be removed; the achievable peak is about 14.1 W
         post("/api/v1/operating-point", "{\"module\":" + TM_A + "," + S10_CASE.formatted(25) + "}")
                 .andExpect(status().isOk())
                 .andExpect(jsonPath("$.feasible").value(false))
@@ -76,7 +76,7 @@ class ComputationApiControllerTest {
 
     @Test
     void fixedCurrentReportsTheObjectTemperatureOfCheckCaseS12() throws Exception {
-        // check-cases.json S12: I = 2.5 A, 8 W, hot-side path 0.35 K/W, cold interface 0.1 K/W → Tobj 264.8909091 K
+        // check case S12: I = 2.5 A, 8 W, hot-side path 0.35 K/W, cold interface 0.1 K/W → Tobj 264.8909091 K
         post("/api/v1/operating-point", "{\"module\":" + TM_A + ",\"ambientC\":25,\"heatLoadW\":8,"
                 + "\"sinkResistanceKPerW\":0.3,\"hotInterfaceKPerW\":0.05,\"coldInterfaceKPerW\":0.1,\"currentA\":2.5}")
                 .andExpect(status().isOk())
@@ -87,7 +87,7 @@ class ComputationApiControllerTest {
 
     @Test
     void arrayCarriesSupplyTotalsAndPerModuleShares() throws Exception {
-        // circuit algebra of identical modules (physics.md g): 2 in series x 3 strings
+        // circuit algebra of identical modules (circuit algebra of identical modules): 2 in series x 3 strings
         var body = post("/api/v1/operating-point", "{\"module\":" + TM_A + ",\"seriesCount\":2,\"parallelCount\":3,"
                 + S10_CASE.formatted(15) + "}")
                 .andExpect(status().isOk())
@@ -104,7 +104,7 @@ class ComputationApiControllerTest {
 
     @Test
     void deriveFromImaxVmaxDtmaxMatchesCheckCaseS05AndReportsConsistencyOfS04() throws Exception {
-        // check-cases.json S05 (Imax/Vmax/ΔTmax variant, after S. Luo, Electronics Cooling 2008, from memory) and
+        // check case S05 (Imax/Vmax/ΔTmax variant, after S. Luo, Electronics Cooling 2008, from memory) and
         // S04 (consistency ratio 0.9102923724); Th = 300 K = 26.85 °C
         post("/api/v1/derive", "{\"module\":{\"imaxA\":3.9,\"vmaxV\":12.4,\"qmaxW\":27,\"dtmaxK\":68,\"hotSideC\":26.85}}")
                 .andExpect(status().isOk())
@@ -119,7 +119,7 @@ class ComputationApiControllerTest {
 
     @Test
     void deriveByQmaxMethodMatchesCheckCaseS04() throws Exception {
-        // check-cases.json S04: Qmax/Imax/ΔTmax variant (H.S. Lee, Thermoelectrics: Design and Materials, 2016, sec. 3.5)
+        // check case S04: Qmax/Imax/ΔTmax variant (H.S. Lee, Thermoelectrics: Design and Materials, 2016, sec. 3.5)
         post("/api/v1/derive", "{\"module\":{\"imaxA\":3.9,\"vmaxV\":12.4,\"qmaxW\":27,\"dtmaxK\":68,\"hotSideC\":26.85,"
                 + "\"method\":\"QMAX_IMAX_DTMAX\"}}")
                 .andExpect(status().isOk())
@@ -129,7 +129,7 @@ class ComputationApiControllerTest {
 
     @Test
     void deriveFromConstructionMatchesCheckCaseS01() throws Exception {
-        // check-cases.json S01: 100 couples, 1 mm², 1.2 mm, contact resistivity 5e-10 Ω·m² → R 2.6 Ω
+        // check case S01: 100 couples, 1 mm², 1.2 mm, contact resistivity 5e-10 Ω·m² → R 2.6 Ω
         post("/api/v1/derive", "{\"module\":{\"couples\":100,\"legAreaMm2\":1,\"legLengthMm\":1.2,"
                 + "\"seebeckPVPerK\":0.0002,\"seebeckNVPerK\":-0.0002,\"resistivityPOhmM\":1e-5,\"resistivityNOhmM\":1e-5,"
                 + "\"conductivityPWPerMK\":1.5,\"conductivityNWPerMK\":1.5,\"contactResistivityOhmM2\":5e-10}}")
@@ -141,7 +141,7 @@ class ComputationApiControllerTest {
 
     @Test
     void ratingsAtAnotherHotSideMatchCheckCaseS02() throws Exception {
-        // check-cases.json S02: ideal ratings of TM-A at Th = 300 K, by brute-force maximisation
+        // check case S02: ideal ratings of TM-A at Th = 300 K, by brute-force maximisation
         post("/api/v1/derive", "{\"module\":" + TM_A + ",\"atHotSideC\":26.85}")
                 .andExpect(status().isOk())
                 .andExpect(jsonPath("$.ratingsAt.dtmaxK").value(closeTo(70.33066888, 1e-5), Double.class))
@@ -151,7 +151,7 @@ class ComputationApiControllerTest {
 
     @Test
     void cascadeAtFixedCurrentsMatchesCheckCaseS15() throws Exception {
-        // check-cases.json S15: Ti 251.7577197 K, COP 0.1460899739 (brute-force root on Ti)
+        // check case S15: Ti 251.7577197 K, COP 0.1460899739 (brute-force root on Ti)
         post("/api/v1/cascade/operating-point", "{\"coldStage\":{\"module\":{\"couples\":30,\"legAreaMm2\":1,"
                 + "\"legLengthMm\":1.2,\"seebeckPVPerK\":0.0002,\"seebeckNVPerK\":-0.0002,\"resistivityPOhmM\":1e-5,"
                 + "\"resistivityNOhmM\":1e-5,\"conductivityPWPerMK\":1.5,\"conductivityNWPerMK\":1.5}},"
@@ -167,7 +167,7 @@ class ComputationApiControllerTest {
 
     @Test
     void cooldownMatchesCheckCaseS16() throws Exception {
-        // check-cases.json S16: lumped capacitance (Incropera & DeWitt ch. 5, from memory), 27 °C = 300 K start
+        // check case S16: lumped capacitance (Incropera & DeWitt ch. 5, from memory), 27 °C = 300 K start
         post("/api/v1/cooldown", "{\"module\":" + TM_A + ",\"currentA\":2,\"hotSideC\":26.85,\"heatCapacityJPerK\":50,"
                 + "\"heatLoadW\":2,\"ambientC\":26.85,\"leakResistanceKPerW\":20,\"startC\":26.85,\"timeS\":60,"
                 + "\"targetC\":0}")
@@ -181,7 +181,7 @@ class ComputationApiControllerTest {
 
     @Test
     void dewPointMatchesCheckCaseS17() throws Exception {
-        // check-cases.json S17: Alduchov & Eskridge, J. Appl. Meteorol. 35(4) 1996; 25 °C, 60 % → 16.70 °C
+        // check case S17: Alduchov & Eskridge, J. Appl. Meteorol. 35(4) 1996; 25 °C, 60 % → 16.70 °C
         mvc.perform(get("/api/v1/dew-point").param("airC", "25").param("relativeHumidityPct", "60"))
                 .andExpect(status().isOk())
                 .andExpect(jsonPath("$.dewPointC").value(closeTo(16.70, 0.01), Double.class));
@@ -211,8 +211,8 @@ class ComputationApiControllerTest {
     }
 
     @Test
-    void dewPointOutsideTheFittedRangeIsA400() throws Exception {
-        mvc.perform(get("/api/v1/dew-point").param("airC", "80").param("relativeHumidityPct", "50"))
+    void dewPointBeyondTheExtrapolatedRangeIsA400() throws Exception {
+        mvc.perform(get("/api/v1/dew-point").param("airC", "201").param("relativeHumidityPct", "50"))
                 .andExpect(status().isBadRequest())
                 .andExpect(jsonPath("$.errors[0].field").value("airC"));
     }

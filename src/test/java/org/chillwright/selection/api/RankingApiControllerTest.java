@@ -28,7 +28,7 @@ import org.springframework.test.web.servlet.ResultActions;
 @AutoConfigureMockMvc
 class RankingApiControllerTest {
 
-    /** check-cases.json S10: 10 W at 5 °C, 25 °C ambient, sink 0.3 K/W, interfaces 0.1 (cold) / 0.05 (hot) K/W. */
+    /** check case S10: 10 W at 5 °C, 25 °C ambient, sink 0.3 K/W, interfaces 0.1 (cold) / 0.05 (hot) K/W. */
     private static final String S10 = "\"objectC\":5,\"ambientC\":25,\"heatLoadW\":10,\"sinkResistanceKPerW\":0.3,"
             + "\"coldInterfaceKPerW\":0.1,\"hotInterfaceKPerW\":0.05";
 

@@ -38,7 +38,7 @@ class SelectionPagesTest {
         TestCatalog.ensure(catalog);
     }
 
-    /** check-cases.json S10 typed into the form in °C and W, with any field replaced by {@code overrides}. */
+    /** check case S10 typed into the form in °C and W, with any field replaced by {@code overrides}. */
     private static MockHttpServletRequestBuilder s10(String path, String... overrides) {
         var fields = new java.util.LinkedHashMap<String, String>();
         fields.put("temperatureUnit", "C");
