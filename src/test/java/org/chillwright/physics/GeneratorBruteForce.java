@@ -16,13 +16,17 @@ import static org.assertj.core.api.Assertions.within;
  * are affine in (Th, Tc), so one Newton step with a finite-difference Jacobian solves them exactly up to
  * round-off. The load that carries that current is RL = S(Th − Tc)/I − R, and its power I·(S(Th − Tc) − I·R).
  * {@link #scanMaxPowerW} scans every current from 0 to the largest possible short-circuit current
- * S(Tsrc − Tsnk)/R, drops the points that are not physical (Tc below the sink, Th above the source,
- * Tc ≥ Th, RL &lt; 0), and refines the best grid point by two finer scans around it.
+ * S(Tsrc − Tsnk)/R (evenly in I and in log I), drops the points that are not physical (Tc below the sink, Th above the source,
+ * Tc ≥ Th, RL &lt; 0), and refines the best grid point by finer scans between its neighbours.
  */
 public final class GeneratorBruteForce {
 
     private static final int SCAN_POINTS = 3000;
     private static final int REFINE_POINTS = 200;
+    /** Decades below topA that the logarithmic part of the first scan covers. */
+    private static final double LOG_DECADES = 10;
+    /** Grid points closer than this fraction of the current bound count as one. */
+    private static final double NEIGHBOUR_GAP = 1e-12;
 
     private GeneratorBruteForce() {
     }
@@ -51,27 +55,43 @@ public final class GeneratorBruteForce {
     /** The most power over every physical point, by scanning the current (see the class comment). */
     public static double scanMaxPowerW(ModuleParameters m, GeneratorCase c) {
         double topA = m.seebeckVPerK() * (c.hotSourceK() - c.coldSinkK()) / m.resistanceOhm();
-        double lowA = 0;
-        double highA = topA;
+        // The bound topA ignores the exchangers: with a large K and large resistances the useful currents are a
+        // tiny fraction of it, so the first scan is evenly spaced in both I and log I, and each refinement
+        // searches between the neighbours of the best point found so far.
+        double[] grid = new double[2 * SCAN_POINTS + 2];
+        for (int n = 0; n <= SCAN_POINTS; n++) {
+            grid[n] = topA * n / SCAN_POINTS;
+            grid[SCAN_POINTS + 1 + n] = topA * Math.pow(10, LOG_DECADES * ((double) n / SCAN_POINTS - 1));
+        }
+        java.util.Arrays.sort(grid);
         double bestW = 0;
-        double bestA = Double.NaN;
-        int points = SCAN_POINTS;
-        for (int round = 0; round < 3; round++) {
-            double stepA = (highA - lowA) / points;
-            for (int n = 0; n <= points; n++) {
-                double i = lowA + n * stepA;
-                double powerW = powerAtCurrentW(m, c, i);
+        for (int round = 0; round < 4; round++) {
+            int best = -1;
+            for (int n = 0; n < grid.length; n++) {
+                double powerW = powerAtCurrentW(m, c, grid[n]);
                 if (powerW > bestW) {
                     bestW = powerW;
-                    bestA = i;
+                    best = n;
                 }
             }
-            if (Double.isNaN(bestA)) {
-                return 0;
+            if (best < 0) {
+                return bestW;
             }
-            lowA = Math.max(0, bestA - stepA);
-            highA = Math.min(topA, bestA + stepA);
-            points = REFINE_POINTS;
+            // the neighbours that differ from the best point: the two spacings nearly share I = topA/10^k
+            int below = best;
+            while (below > 0 && grid[best] - grid[below] <= NEIGHBOUR_GAP * topA) {
+                below--;
+            }
+            int above = best;
+            while (above < grid.length - 1 && grid[above] - grid[best] <= NEIGHBOUR_GAP * topA) {
+                above++;
+            }
+            double lowA = grid[below];
+            double highA = grid[above];
+            grid = new double[REFINE_POINTS + 1];
+            for (int n = 0; n <= REFINE_POINTS; n++) {
+                grid[n] = lowA + (highA - lowA) * n / REFINE_POINTS;
+            }
         }
         return bestW;
     }
@@ -83,7 +103,10 @@ public final class GeneratorBruteForce {
         double tc = junctionK[1];
         double emfV = m.seebeckVPerK() * (th - tc);
         double loadOhm = i > 0 ? emfV / i - m.resistanceOhm() : Double.POSITIVE_INFINITY;
-        boolean physical = tc >= c.coldSinkK() && tc < th && th <= c.hotSourceK() && loadOhm >= 0;
+        // the same round-off slack as assertPhysical: with a zero exchanger resistance a face sits on its
+        // reservoir, and the Newton step lands it an ulp either side
+        double slackK = 1e-9 * c.hotSourceK();
+        boolean physical = tc >= c.coldSinkK() - slackK && tc < th && th <= c.hotSourceK() + slackK && loadOhm >= 0;
         return physical ? i * (emfV - i * m.resistanceOhm()) : Double.NEGATIVE_INFINITY;
     }
 

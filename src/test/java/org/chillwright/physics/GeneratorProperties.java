@@ -3,6 +3,7 @@ package org.chillwright.physics;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
+import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
@@ -44,5 +45,35 @@ class GeneratorProperties {
         double scannedW = GeneratorBruteForce.scanMaxPowerW(array, c);
         assertThat(best.powerW()).as("most power for %s in %s", array, c)
                 .isCloseTo(scannedW, within(POWER_AGREEMENT * scannedW));
+    }
+
+    /**
+     * A large, well-conducting array behind poor exchangers: the junctions see under 2 K of the 1,200 K, and the
+     * best current is 1.19 A against a short-circuit bound of 7,100 A. A scan spaced only in I once missed it.
+     */
+    @Example
+    void findsTheNarrowPeakOfAWellConductingArrayBehindPoorExchangers() {
+        var array = new ModuleParameters(0.05, 0.00843644544431946, 70.0);
+        var c = new GeneratorCase(1432.03, 232.03, 3.8, 5.0);
+
+        GeneratorPoint best = solver.maxPower(array, c);
+
+        GeneratorBruteForce.assertPhysical(array, c, best);
+        double scannedW = GeneratorBruteForce.scanMaxPowerW(array, c);
+        assertThat(scannedW).isGreaterThan(0.05);
+        assertThat(best.powerW()).isCloseTo(scannedW, within(POWER_AGREEMENT * scannedW));
+    }
+
+    /** A hot face on its source (0 K/W) sits an ulp either side of it; the scan must not drop those points. */
+    @Example
+    void findsThePeakWithTheHotFaceOnItsSource() {
+        var array = new ModuleParameters(0.08, 0.8875739644970414, 8.32);
+        var c = new GeneratorCase(230.51, 230.0, 0.0, 0.4);
+
+        GeneratorPoint best = solver.maxPower(array, c);
+
+        GeneratorBruteForce.assertPhysical(array, c, best);
+        double scannedW = GeneratorBruteForce.scanMaxPowerW(array, c);
+        assertThat(best.powerW()).isCloseTo(scannedW, within(POWER_AGREEMENT * scannedW));
     }
 }
