@@ -7,6 +7,7 @@ import java.util.Set;
 import org.chillwright.account.AccountService;
 import org.chillwright.account.Role;
 import org.chillwright.account.api.CreateUserRequest;
+import org.chillwright.account.api.PasswordResetRequest;
 import org.chillwright.web.ConflictException;
 import org.chillwright.web.InvalidRequestException;
 import org.springframework.security.access.prepost.PreAuthorize;
@@ -80,7 +81,7 @@ class AccountAdminController {
     }
 
     @PostMapping("/{id}/password")
-    String resetPassword(@PathVariable long id, @Valid PasswordResetForm form, BindingResult binding,
+    String resetPassword(@PathVariable long id, @Valid PasswordResetRequest form, BindingResult binding,
             RedirectAttributes redirect) {
         if (binding.hasErrors()) {
             redirect.addFlashAttribute("problemId", id);
