@@ -56,7 +56,7 @@ class SecretsNeverEchoedTest {
 
     private long someone(String name) {
         if (!accounts.exists(name)) {
-            accounts.create(name, USER_PASSWORD, EnumSet.of(Role.ENGINEER));
+            accounts.create(name, USER_PASSWORD, EnumSet.of(Role.ENGINEER), "test-setup");
         }
         return accounts.list().stream().filter(a -> a.username().equals(name)).findFirst().orElseThrow().id();
     }

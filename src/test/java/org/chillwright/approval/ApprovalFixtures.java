@@ -47,7 +47,7 @@ public final class ApprovalFixtures {
     /** An account with exactly these roles, created on first use. */
     public static String account(AccountService accounts, String username, Set<Role> roles) {
         if (!accounts.exists(username)) {
-            accounts.create(username, PASSWORD, roles);
+            accounts.create(username, PASSWORD, roles, "test-setup");
         }
         return username;
     }

@@ -1,6 +1,7 @@
 package org.chillwright.account.api;
 
 import jakarta.validation.Valid;
+import java.security.Principal;
 import org.chillwright.account.AccountService;
 import org.chillwright.account.AccountView;
 import org.springframework.http.HttpStatus;
@@ -27,14 +28,14 @@ class UserApiController {
 
     @PostMapping
     @ResponseStatus(HttpStatus.CREATED)
-    AccountView create(@Valid @RequestBody CreateUserRequest request) {
-        return accounts.create(request.username(), request.password(), request.roles());
+    AccountView create(@Valid @RequestBody CreateUserRequest request, Principal me) {
+        return accounts.create(request.username(), request.password(), request.roles(), me.getName());
     }
 
     /** Sets a new password for someone who lost theirs; their sessions end. */
     @PutMapping("/{id}/password")
     @ResponseStatus(HttpStatus.NO_CONTENT)
-    void resetPassword(@PathVariable long id, @Valid @RequestBody PasswordResetRequest request) {
-        accounts.resetPassword(id, request.password());
+    void resetPassword(@PathVariable long id, @Valid @RequestBody PasswordResetRequest request, Principal me) {
+        accounts.resetPassword(id, request.password(), me.getName());
     }
 }
