@@ -129,7 +129,7 @@ public class ApiErrorAdvice extends ResponseEntityExceptionHandler {
     @ExceptionHandler(ConflictException.class)
     ProblemDetail conflict(ConflictException ex) {
         var problem = ProblemDetail.forStatusAndDetail(HttpStatus.CONFLICT, ex.getMessage());
-        problem.setTitle("Conflict");
+        problem.setTitle(ex.title());
         if (ex.field() != null) {
             problem.setProperty(ERRORS, List.of(new FieldProblem(ex.field(), ex.getMessage())));
         }
