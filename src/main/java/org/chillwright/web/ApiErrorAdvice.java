@@ -23,6 +23,7 @@ import org.springframework.web.method.annotation.HandlerMethodValidationExceptio
 import org.springframework.web.method.annotation.MethodArgumentTypeMismatchException;
 import org.springframework.web.servlet.mvc.method.annotation.ResponseEntityExceptionHandler;
 import tools.jackson.core.JacksonException;
+import tools.jackson.core.exc.StreamReadException;
 import tools.jackson.databind.exc.InvalidFormatException;
 import tools.jackson.databind.exc.MismatchedInputException;
 import tools.jackson.databind.exc.UnrecognizedPropertyException;
@@ -70,9 +71,16 @@ public class ApiErrorAdvice extends ResponseEntityExceptionHandler {
             String field = jsonPath(jackson.getPath());
             return badRequest(List.of(new FieldProblem(field, describe(jackson, secret(jackson.getPath())))));
         }
-        String message = cause instanceof JacksonException jackson
-                ? "the body is not valid JSON: " + plainJacksonMessage(jackson)
-                : "a JSON body is required";
+        String message;
+        if (cause instanceof StreamReadException syntax) {
+            // the parser's own message quotes the broken text, which may be a password typed without quotes
+            message = "the body is not valid JSON" + where(syntax);
+        } else if (cause instanceof MismatchedInputException mismatch && mismatch.getTargetType() != null) {
+            message = "expected " + expectation(mismatch.getTargetType());
+        } else {
+            message = cause instanceof JacksonException ? "the body is not valid JSON for this request"
+                    : "a JSON body is required";
+        }
         return badRequest(List.of(new FieldProblem("body", message)));
     }
 
@@ -185,6 +193,9 @@ public class ApiErrorAdvice extends ResponseEntityExceptionHandler {
 
     /** What was wrong with one JSON value, in words that name the expectation and what came in. */
     private static String describe(JacksonException ex, boolean secret) {
+        if (ex instanceof StreamReadException syntax) {
+            return "is not valid JSON" + where(syntax);
+        }
         if (ex instanceof UnrecognizedPropertyException unknown) {
             return "is not a field of this request (known fields: " + unknown.getKnownPropertyIds().stream()
                     .map(String::valueOf).sorted().collect(Collectors.joining(", ")) + ")";
@@ -196,6 +207,13 @@ public class ApiErrorAdvice extends ResponseEntityExceptionHandler {
             return "expected " + expectation(mismatch.getTargetType());
         }
         return secret ? "could not be read" : plainJacksonMessage(ex);
+    }
+
+    /** Where in the body the parser stopped, without quoting what it found there. */
+    private static String where(JacksonException ex) {
+        var location = ex.getLocation();
+        return location == null || location.getLineNr() < 1 ? ""
+                : " (line " + location.getLineNr() + ", column " + location.getColumnNr() + ")";
     }
 
     private static String expectation(Class<?> type) {
