@@ -102,7 +102,8 @@ class ProblemBodiesEverywhereTest {
         var response = send("DELETE", "/api/v1/lists", null, null, accepting("application/json"));
         var body = problem(response, 405);
         assertThat(response.headers().firstValue("Allow")).hasValueSatisfying(allow -> assertThat(allow).contains("GET", "POST"));
-        assertThat(body.get("detail").asString()).contains("it takes GET, POST");
+        // the order of the allowed methods is the container's, not ours
+        assertThat(body.get("detail").asString()).contains("it takes ").contains("GET").contains("POST");
     }
 
     @Test
