@@ -2,6 +2,7 @@ package org.chillwright;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.junit.jupiter.api.Assumptions.assumeFalse;
 
 import java.util.EnumSet;
 import org.chillwright.account.AccountService;
@@ -12,7 +13,7 @@ import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.dao.DataAccessException;
 import org.springframework.jdbc.core.JdbcTemplate;
 
-/** The same Flyway migrations run on the real PostgreSQL server that .ci/run starts, and data round-trips. */
+/** The same Flyway migrations run on a real PostgreSQL server, and data round-trips. */
 @SpringBootTest
 @PostgresDatabase
 class PostgresIT {
@@ -25,6 +26,20 @@ class PostgresIT {
     @Test
     void runsOnPostgresql() {
         assertThat(jdbc.queryForObject("SELECT version()", String.class)).startsWith("PostgreSQL");
+    }
+
+    @Test
+    void embeddedServerIsPostgresql16AsInTheComposeFile() {
+        assumeFalse(PostgresTestServer.isNamed(), "a named server runs whatever version it has");
+        assertThat(jdbc.queryForObject("SHOW server_version", String.class)).startsWith("16.");
+    }
+
+    @Test
+    void embeddedServerGivesTheApplicationADatabaseOfItsOwnAndNoSuperuserRights() {
+        assumeFalse(PostgresTestServer.isNamed(), "a named server's database and role are as given");
+        assertThat(jdbc.queryForObject("SELECT current_database()", String.class)).startsWith("chillwright_it_");
+        assertThat(jdbc.queryForObject("SELECT rolsuper FROM pg_roles WHERE rolname = current_user", Boolean.class))
+                .isFalse();
     }
 
     @Test

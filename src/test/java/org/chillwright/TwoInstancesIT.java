@@ -8,6 +8,7 @@ import java.net.http.HttpClient;
 import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
 import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
 import java.util.Base64;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -42,17 +43,19 @@ class TwoInstancesIT {
 
     @BeforeAll
     static void startBoth() {
-        first = start();
-        second = start();
+        var database = PostgresTestServer.newDatabase();
+        first = start(database);
+        second = start(database);
         one = "http://localhost:" + first.getEnvironment().getProperty("local.server.port");
         two = "http://localhost:" + second.getEnvironment().getProperty("local.server.port");
     }
 
-    private static ConfigurableApplicationContext start() {
-        // command-line arguments outrank application-postgres.properties, as @TestPropertySource does
+    private static ConfigurableApplicationContext start(PostgresTestServer.Database database) {
+        // command-line arguments outrank application-postgres.properties
+        var arguments = new ArrayList<>(database.asArguments());
+        arguments.addAll(List.of("--server.port=0", "--" + TestModuleDirectory.ENABLED));
         return new SpringApplicationBuilder(ChillwrightApplication.class).profiles("postgres")
-                .run("--server.port=0", "--" + PostgresDatabase.URL, "--" + PostgresDatabase.USER,
-                        "--" + PostgresDatabase.PASSWORD, "--" + TestModuleDirectory.ENABLED);
+                .run(arguments.toArray(String[]::new));
     }
 
     @AfterAll

@@ -593,7 +593,8 @@ public final class OperatingPointSolver {
         return new double[] {(b1 * a22 - a12 * b2) / det, (a11 * b2 - a21 * b1) / det};
     }
 
-    private static Infeasible limitViolation(DriveLimits limits, double currentA, double voltageV) {
+    /** The first drive limit a point breaks, or null (physics.md e.5); shared with {@link DetailedSolver}. */
+    static Infeasible limitViolation(DriveLimits limits, double currentA, double voltageV) {
         if (limits.hasRatedImax() && currentA > limits.ratedImaxA()) {
             return new Infeasible(Reason.CURRENT_ABOVE_IMAX,
                     format("needs %.2f A, above the rated Imax of %.2f A", currentA, limits.ratedImaxA()));

@@ -14,12 +14,9 @@ import org.openqa.selenium.support.ui.WebDriverWait;
 
 /**
  * Headless Debian Chromium driven by Debian's chromedriver, given explicitly so that Selenium
- * Manager never tries the network (stack.md). Each browser gets a fresh profile directory.
+ * Manager never tries the network. Each browser gets a fresh profile directory.
  */
 public final class Browser implements AutoCloseable {
-
-    private static final String CHROMIUM = "/usr/bin/chromium";
-    private static final String CHROMEDRIVER = "/usr/bin/chromedriver";
 
     private final ChromeDriver driver;
     private final Path profile;
@@ -27,12 +24,12 @@ public final class Browser implements AutoCloseable {
     public Browser() throws IOException {
         profile = Files.createTempDirectory("chillwright-chromium");
         var options = new ChromeOptions();
-        options.setBinary(CHROMIUM);
+        options.setBinary(BrowserInstallation.DEBIAN.chromium().toFile());
         options.addArguments("--headless=new", "--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage",
                 "--disable-background-networking", "--disable-component-update", "--disable-sync",
                 "--disable-quic", "--no-first-run", "--window-size=1280,1000", "--user-data-dir=" + profile);
-        var service = new ChromeDriverService.Builder().usingDriverExecutable(Path.of(CHROMEDRIVER).toFile())
-                .usingAnyFreePort().build();
+        var service = new ChromeDriverService.Builder()
+                .usingDriverExecutable(BrowserInstallation.DEBIAN.chromedriver().toFile()).usingAnyFreePort().build();
         driver = new ChromeDriver(service, options);
         driver.manage().timeouts().implicitlyWait(Duration.ofSeconds(2));
     }

@@ -3,6 +3,7 @@ package org.chillwright.browser;
 import java.time.Duration;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.extension.ExtendWith;
 import org.openqa.selenium.By;
 import org.openqa.selenium.support.ui.ExpectedConditions;
 import org.openqa.selenium.support.ui.Select;
@@ -12,7 +13,9 @@ import org.springframework.boot.test.web.server.LocalServerPort;
  * What every real-browser test shares: one headless Chromium per test class, the port of the
  * application under test, and the steps many journeys take (signing in and out, moving a list entry).
  * Subclasses carry their own {@code @SpringBootTest(webEnvironment = RANDOM_PORT)}.
+ * Without a working Chromium they are skipped with a notice, or fail under CI ({@link BrowserCondition}).
  */
+@ExtendWith(BrowserCondition.class)
 abstract class BrowserJourney {
 
     protected static final Duration PAGE_LOAD = Duration.ofSeconds(15);
