@@ -3,7 +3,8 @@ package org.chillwright.approval;
 import java.io.IOException;
 import java.time.Clock;
 import java.util.List;
-import java.util.Optional;
+import java.util.LinkedHashMap;
+import java.util.Map;
 import java.util.Set;
 import java.util.function.Function;
 import java.util.stream.Collectors;
@@ -192,13 +193,20 @@ public class ApprovedListService {
     }
 
     /**
-     * Why this person could not approve this entry under the four-eyes rule, or empty when they could (or
-     * the rule is relaxed); for saying so on the page before they try.
+     * For each entry this person may move to APPROVED by role but not under the four-eyes rule, why not;
+     * for saying so on the page before they try. Empty when the team has relaxed the rule.
      */
     @Transactional(readOnly = true)
-    public Optional<String> fourEyesNote(Actor actor, EntryView entry) {
-        return Workflow.fourEyesRefusal(EntryState.APPROVED, entry.proposedBy(), entry.qualifiedBy(), actor,
-                settings.fourEyesApproval());
+    public Map<Long, String> fourEyesNotes(Actor actor, List<EntryView> onList) {
+        boolean fourEyes = settings.fourEyesApproval();
+        var notes = new LinkedHashMap<Long, String>();
+        for (var entry : onList) {
+            if (Workflow.targetsFor(actor, entry.state()).contains(EntryState.APPROVED)) {
+                Workflow.fourEyesRefusal(EntryState.APPROVED, entry.proposedBy(), entry.qualifiedBy(), actor, fourEyes)
+                        .ifPresent(why -> notes.put(entry.id(), why));
+            }
+        }
+        return notes;
     }
 
     /** Whether approvals need a second person (the team setting). */

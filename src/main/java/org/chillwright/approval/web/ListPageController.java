@@ -92,17 +92,12 @@ class ListPageController {
         var actor = actor(who);
         var list = lists.list(id);
         var targets = new LinkedHashMap<Long, Set<EntryState>>();
-        var fourEyesNotes = new LinkedHashMap<Long, String>();
         for (EntryView entry : list.entries()) {
-            var open = lists.targetsFor(actor, entry.state());
-            targets.put(entry.id(), open);
-            if (open.contains(EntryState.APPROVED)) {
-                lists.fourEyesNote(actor, entry).ifPresent(note -> fourEyesNotes.put(entry.id(), note));
-            }
+            targets.put(entry.id(), lists.targetsFor(actor, entry.state()));
         }
         model.addAttribute("list", list);
         model.addAttribute("targets", targets);
-        model.addAttribute("fourEyesNotes", fourEyesNotes);
+        model.addAttribute("fourEyesNotes", lists.fourEyesNotes(actor, list.entries()));
         model.addAttribute("fourEyes", lists.fourEyesApproval());
         model.addAttribute("audit", lists.audit(id));
         model.addAttribute("mayEdit", lists.mayEditLists(actor));
