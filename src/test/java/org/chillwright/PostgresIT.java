@@ -1,6 +1,7 @@
 package org.chillwright;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.junit.jupiter.api.Assumptions.assumeFalse;
 
 import java.util.EnumSet;
@@ -9,6 +10,7 @@ import org.chillwright.account.Role;
 import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.dao.DataAccessException;
 import org.springframework.jdbc.core.JdbcTemplate;
 
 /** The same Flyway migrations run on a real PostgreSQL server, and data round-trips. */
@@ -51,9 +53,21 @@ class PostgresIT {
     @Test
     void accountRoundTrips() {
         String name = "pg-user-" + System.nanoTime();
-        accounts.create(name, "pg-user-password", EnumSet.of(Role.PURCHASING, Role.APPROVER));
+        accounts.create(name, "pg-user-password", EnumSet.of(Role.PURCHASING, Role.APPROVER), "test-setup");
         var loaded = accounts.loadUserByUsername(name);
         assertThat(loaded.getAuthorities()).extracting(Object::toString)
                 .containsExactlyInAnyOrder("ROLE_PURCHASING", "ROLE_APPROVER");
+    }
+
+    @Test
+    void accountAuditRowsCannotBeChangedEvenBySql() {
+        String name = "pg-audited-" + System.nanoTime();
+        accounts.create(name, "pg-user-password", EnumSet.of(Role.ENGINEER), "test-setup");
+        assertThatThrownBy(() -> jdbc.update("UPDATE account_audit SET detail = 'rewritten' WHERE subject = ?", name))
+                .isInstanceOf(DataAccessException.class).hasMessageContaining("append-only");
+        assertThatThrownBy(() -> jdbc.update("DELETE FROM account_audit WHERE subject = ?", name))
+                .isInstanceOf(DataAccessException.class).hasMessageContaining("append-only");
+        assertThat(jdbc.queryForObject("SELECT count(*) FROM account_audit WHERE subject = ?", Integer.class, name))
+                .isEqualTo(1);
     }
 }

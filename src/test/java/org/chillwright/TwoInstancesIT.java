@@ -29,8 +29,7 @@ import tools.jackson.databind.ObjectMapper;
  */
 class TwoInstancesIT {
 
-    private static final String ADMIN_BASIC = "Basic " + Base64.getEncoder()
-            .encodeToString("admin:admin-test-password".getBytes(StandardCharsets.UTF_8));
+    private static final String ADMIN_BASIC = basic("admin", "admin-test-password");
     private static final Pattern CSRF = Pattern.compile("name=\"_csrf\"\\s+value=\"([^\"]+)\"");
     private static final Pattern SESSION = Pattern.compile("SESSION=([^;]+)");
 
@@ -65,8 +64,17 @@ class TwoInstancesIT {
         first.close();
     }
 
+    private static String basic(String username, String password) {
+        return "Basic " + Base64.getEncoder().encodeToString((username + ":" + password).getBytes(StandardCharsets.UTF_8));
+    }
+
     private HttpResponse<String> api(String base, String method, String path, String body) throws Exception {
-        var request = HttpRequest.newBuilder(URI.create(base + path)).header("Authorization", ADMIN_BASIC)
+        return api(base, method, path, body, ADMIN_BASIC);
+    }
+
+    private HttpResponse<String> api(String base, String method, String path, String body, String authorization)
+            throws Exception {
+        var request = HttpRequest.newBuilder(URI.create(base + path)).header("Authorization", authorization)
                 .header("Content-Type", "application/json").header("Accept", "application/json")
                 .method(method, body == null ? HttpRequest.BodyPublishers.noBody() : HttpRequest.BodyPublishers.ofString(body))
                 .build();
@@ -149,10 +157,15 @@ class TwoInstancesIT {
         String entryPath = "/api/v1/lists/" + listId + "/entries/" + entry.get("id").asLong() + "/transitions";
         var qualifying = json.readTree(api(one, "POST", entryPath, "{\"to\":\"QUALIFYING\",\"reason\":\"in test\"}").body());
         long version = qualifying.get("version").asLong();
+        // the admin proposed and qualified it, so a second person approves (four eyes)
+        String approver = ApprovalFixtures.unique("shared-approver");
+        created(one, "/api/v1/users", "{\"username\":\"" + approver + "\",\"password\":\"" + ApprovalFixtures.PASSWORD
+                + "\",\"roles\":[\"APPROVER\"]}");
+        String approverBasic = basic(approver, ApprovalFixtures.PASSWORD);
 
         var statuses = Together.run(List.of(one, two).stream().<Callable<Integer>>map(
                 base -> () -> api(base, "POST", entryPath, "{\"to\":\"APPROVED\",\"reason\":\"signed on " + base
-                        + "\",\"version\":" + version + "}").statusCode()).toList());
+                        + "\",\"version\":" + version + "}", approverBasic).statusCode()).toList());
         assertThat(statuses).containsExactlyInAnyOrder(200, 409);
     }
 }

@@ -39,7 +39,7 @@ class AdminBootstrap implements ApplicationRunner {
         boolean generated = configuredPassword.isBlank();
         String password = generated ? generatePassword() : configuredPassword;
         try {
-            accounts.create(ADMIN_USERNAME, password, EnumSet.allOf(Role.class));
+            accounts.create(ADMIN_USERNAME, password, EnumSet.allOf(Role.class), AccountAudit.SYSTEM);
         } catch (ConflictException anotherInstanceWasFirst) {
             return;
         }

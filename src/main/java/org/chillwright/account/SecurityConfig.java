@@ -20,11 +20,13 @@ import org.springframework.security.core.AuthenticationException;
 import org.springframework.security.config.annotation.method.configuration.EnableMethodSecurity;
 import org.springframework.security.config.annotation.web.builders.HttpSecurity;
 import org.springframework.security.config.annotation.web.configurers.AbstractHttpConfigurer;
+import org.springframework.security.config.annotation.web.configurers.HeadersConfigurer;
 import org.springframework.security.config.http.SessionCreationPolicy;
 import org.springframework.security.crypto.factory.PasswordEncoderFactories;
 import org.springframework.security.crypto.password.PasswordEncoder;
 import org.springframework.security.web.SecurityFilterChain;
 import org.springframework.security.web.access.ExceptionTranslationFilter;
+import org.springframework.security.web.header.writers.ReferrerPolicyHeaderWriter.ReferrerPolicy;
 
 /**
  * Two filter chains over the same accounts: the API is stateless HTTP Basic without CSRF (it takes
@@ -51,6 +53,13 @@ class SecurityConfig {
         "/login", "/error", "/css/**", "/js/**", "/img/**", "/webjars/**", "/favicon.ico", "/actuator/health/**"
     };
     static final String[] API_DOCS = {"/v3/api-docs/**", "/api-docs", "/swagger-ui/**", "/swagger-ui.html"};
+    /** No page needs any of these browser features, so none may use them (nor anything framed, were it allowed). */
+    static final String PERMISSIONS_POLICY = "accelerometer=(), ambient-light-sensor=(), autoplay=(), bluetooth=(), "
+            + "camera=(), display-capture=(), encrypted-media=(), geolocation=(), gyroscope=(), hid=(), "
+            + "magnetometer=(), microphone=(), midi=(), payment=(), publickey-credentials-get=(), "
+            + "screen-wake-lock=(), serial=(), usb=(), xr-spatial-tracking=()";
+    /** A year, the usual HSTS lifetime (common practice, no source). */
+    static final long HSTS_MAX_AGE_S = 31_536_000;
 
     private final boolean openReads;
 
@@ -78,6 +87,7 @@ class SecurityConfig {
             throws Exception {
         http.securityMatcher("/api/**")
                 .authenticationManager(authentication)
+                .headers(SecurityConfig::commonHeaders)
                 .addFilterBefore(new RequestLogFilter(), ExceptionTranslationFilter.class)
                 .csrf(AbstractHttpConfigurer::disable)
                 .sessionManagement(s -> s.sessionCreationPolicy(SessionCreationPolicy.STATELESS))
@@ -96,6 +106,18 @@ class SecurityConfig {
                     auth.anyRequest().authenticated();
                 });
         return http.build();
+    }
+
+    /**
+     * Headers on every response of both chains, beside Spring Security's defaults (nosniff, frame denial,
+     * no caching): the address of a page never leaves the site in a Referer, no browser feature is
+     * available to a page, and over HTTPS (also when a trusted balancer says so with X-Forwarded-Proto)
+     * browsers are told to use HTTPS only.
+     */
+    private static void commonHeaders(HeadersConfigurer<HttpSecurity> headers) {
+        headers.referrerPolicy(referrer -> referrer.policy(ReferrerPolicy.SAME_ORIGIN))
+                .permissionsPolicyHeader(permissions -> permissions.policy(PERMISSIONS_POLICY))
+                .httpStrictTransportSecurity(hsts -> hsts.includeSubDomains(true).maxAgeInSeconds(HSTS_MAX_AGE_S));
     }
 
     private static void signInRequired(ProblemWriter problems, HttpServletResponse response, AuthenticationException e)
@@ -119,9 +141,9 @@ class SecurityConfig {
                                 + (e instanceof LoginThrottledException ? "/login?locked" : "/login?error"))))
                 .logout(logout -> logout.logoutSuccessUrl("/login?signedOut"))
                 .httpBasic(Customizer.withDefaults())
-                .headers(h -> h.contentSecurityPolicy(csp -> csp.policyDirectives(
+                .headers(h -> commonHeaders(h.contentSecurityPolicy(csp -> csp.policyDirectives(
                         "default-src 'self'; img-src 'self' data: blob:; style-src 'self' 'unsafe-inline'; "
-                                + "script-src 'self'; object-src 'none'; frame-ancestors 'none'")))
+                                + "script-src 'self'; object-src 'none'; frame-ancestors 'none'"))))
                 .authorizeHttpRequests(auth -> {
                     auth.requestMatchers(ALWAYS_OPEN).permitAll();
                     auth.requestMatchers("/admin/**").hasRole(Role.ADMIN.name());

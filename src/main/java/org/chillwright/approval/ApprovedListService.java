@@ -3,11 +3,14 @@ package org.chillwright.approval;
 import java.io.IOException;
 import java.time.Clock;
 import java.util.List;
+import java.util.LinkedHashMap;
+import java.util.Map;
 import java.util.Set;
 import java.util.function.Function;
 import java.util.stream.Collectors;
 import org.chillwright.approval.AuditRecord.Action;
 import org.chillwright.account.Role;
+import org.chillwright.account.TeamSettings;
 import org.chillwright.web.ConflictException;
 import org.chillwright.web.InvalidRequestException;
 import org.chillwright.web.NotFoundException;
@@ -31,14 +34,16 @@ public class ApprovedListService {
     private final ListEntryRepository entries;
     private final AuditRecordRepository audit;
     private final ModuleDirectory modules;
+    private final TeamSettings settings;
     private final Clock clock;
 
     ApprovedListService(ApprovedListRepository lists, ListEntryRepository entries, AuditRecordRepository audit,
-            ModuleDirectory modules, Clock clock) {
+            ModuleDirectory modules, TeamSettings settings, Clock clock) {
         this.lists = lists;
         this.entries = entries;
         this.audit = audit;
         this.modules = modules;
+        this.settings = settings;
         this.clock = clock;
     }
 
@@ -131,7 +136,9 @@ public class ApprovedListService {
     }
 
     /**
-     * Moves an entry to another state, with the reason recorded in the audit trail.
+     * Moves an entry to another state, with the reason recorded in the audit trail. An approval by the
+     * entry's proposer or qualifier is refused while the team keeps the four-eyes rule
+     * ({@link FourEyesRefusedException}, 409); the audit line of an approval names both of them.
      *
      * @param version the entry version the person saw, or null to act on whatever is stored
      * @param replacedByEntryId only for {@code OBSOLETE}: the entry on the same list that replaces it
@@ -151,6 +158,11 @@ public class ApprovedListService {
             var possible = Workflow.movesFrom(from);
             throw new ConflictException("to", "an entry in state " + from + " cannot move to " + to
                     + (possible.isEmpty() ? "; it is final" : " (from " + from + " it can move to " + possible + ")"));
+        }
+        var refusal = Workflow.fourEyesRefusal(to, entry.getProposedBy(), entry.getQualifiedBy(), actor,
+                settings.fourEyesApproval());
+        if (refusal.isPresent()) {
+            throw new FourEyesRefusedException(refusal.get());
         }
         checkReplacement(entry, to, replacedByEntryId);
         entry.moveTo(to, replacedByEntryId, actor.username(), clock.instant());
@@ -178,6 +190,28 @@ public class ApprovedListService {
     /** The moves this person could make on an entry in this state; empty when none. */
     public Set<EntryState> targetsFor(Actor actor, EntryState from) {
         return Workflow.targetsFor(actor, from);
+    }
+
+    /**
+     * For each entry this person may move to APPROVED by role but not under the four-eyes rule, why not;
+     * for saying so on the page before they try. Empty when the team has relaxed the rule.
+     */
+    @Transactional(readOnly = true)
+    public Map<Long, String> fourEyesNotes(Actor actor, List<EntryView> onList) {
+        boolean fourEyes = settings.fourEyesApproval();
+        var notes = new LinkedHashMap<Long, String>();
+        for (var entry : onList) {
+            if (Workflow.targetsFor(actor, entry.state()).contains(EntryState.APPROVED)) {
+                Workflow.fourEyesRefusal(EntryState.APPROVED, entry.proposedBy(), entry.qualifiedBy(), actor, fourEyes)
+                        .ifPresent(why -> notes.put(entry.id(), why));
+            }
+        }
+        return notes;
+    }
+
+    /** Whether approvals need a second person (the team setting). */
+    public boolean fourEyesApproval() {
+        return settings.fourEyesApproval();
     }
 
     public boolean mayPropose(Actor actor) {
@@ -273,6 +307,6 @@ public class ApprovedListService {
                 module == null ? null : module.supplier(), module == null ? null : module.partNumber(),
                 module == null ? null : module.lifecycle(), entry.getState(), entry.getNote(), entry.getCommercialNote(),
                 entry.getReplacedByEntryId(), entry.getProposedBy(), entry.getProposedAt(), entry.getChangedBy(),
-                entry.getChangedAt());
+                entry.getChangedAt(), entry.getQualifiedBy());
     }
 }

@@ -12,7 +12,8 @@ import org.apache.commons.csv.CSVPrinter;
 /** A list's audit trail as CSV, one row per line of the trail, for filing with a change record. */
 final class AuditCsv {
 
-    static final String[] HEADER = {"at", "by", "entryId", "moduleId", "partNumber", "action", "from", "to", "reason"};
+    static final String[] HEADER = {"at", "by", "entryId", "moduleId", "partNumber", "action", "from", "to", "reason",
+        "proposedBy", "qualifiedBy"};
 
     private AuditCsv() {
     }
@@ -25,7 +26,8 @@ final class AuditCsv {
                 var entry = line.entryId() == null ? null : entries.get(line.entryId());
                 printer.printRecord(line.at(), cell(line.by()), line.entryId(),
                         entry == null ? null : entry.moduleId(), cell(entry == null ? null : entry.partNumber()),
-                        line.action(), line.from(), line.to(), cell(line.reason()));
+                        line.action(), line.from(), line.to(), cell(line.reason()), cell(line.proposedBy()),
+                        cell(line.qualifiedBy()));
             }
         }
     }

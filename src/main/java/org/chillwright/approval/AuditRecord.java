@@ -51,6 +51,14 @@ class AuditRecord {
     @Column(nullable = false, length = 2000)
     private String reason;
 
+    /** On an approval: the entry's proposer, so the line shows both people. */
+    @Column(name = "proposed_by", length = 64)
+    private String proposedBy;
+
+    /** On an approval: who moved the entry to QUALIFYING. */
+    @Column(name = "qualified_by", length = 64)
+    private String qualifiedBy;
+
     protected AuditRecord() {
     }
 
@@ -63,9 +71,14 @@ class AuditRecord {
         this.actor = actor;
         this.occurredAt = at;
         this.reason = reason;
+        if (action == Action.TRANSITION && entry.getState() == EntryState.APPROVED) {
+            this.proposedBy = entry.getProposedBy();
+            this.qualifiedBy = entry.getQualifiedBy();
+        }
     }
 
     AuditView view() {
-        return new AuditView(occurredAt, actor, entryId, fromState, toState, reason, action.name());
+        return new AuditView(occurredAt, actor, entryId, fromState, toState, reason, action.name(), proposedBy,
+                qualifiedBy);
     }
 }

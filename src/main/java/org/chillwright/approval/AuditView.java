@@ -7,7 +7,15 @@ import java.time.Instant;
  *
  * @param from null for the proposal that created the entry
  * @param action {@code PROPOSED}, {@code TRANSITION} or {@code COMMERCIAL_NOTE}
+ * @param proposedBy on an approval, who had proposed the entry (null on other lines and on approvals
+ *        recorded before approvals named them)
+ * @param qualifiedBy on an approval, who had moved the entry to QUALIFYING
  */
 public record AuditView(Instant at, String by, Long entryId, EntryState from, EntryState to, String reason,
-        String action) {
+        String action, String proposedBy, String qualifiedBy) {
+
+    /** Whether this line is an approval by someone other than its proposer and its qualifier. */
+    public boolean independentApproval() {
+        return to == EntryState.APPROVED && proposedBy != null && !proposedBy.equals(by) && !by.equals(qualifiedBy);
+    }
 }

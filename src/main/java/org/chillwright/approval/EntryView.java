@@ -5,8 +5,10 @@ import java.time.Instant;
 /**
  * One module on a list. {@code supplier}, {@code partNumber} and {@code lifecycle} come from the
  * catalog and are null when it no longer knows the module. Send {@code version} back with a transition.
+ *
+ * @param qualifiedBy who last moved the entry to QUALIFYING, or null when nobody has yet
  */
 public record EntryView(long id, long version, long moduleId, String supplier, String partNumber, String lifecycle,
         EntryState state, String note, String commercialNote, Long replacedByEntryId, String proposedBy,
-        Instant proposedAt, String changedBy, Instant changedAt) {
+        Instant proposedAt, String changedBy, Instant changedAt, String qualifiedBy) {
 }

@@ -44,6 +44,10 @@ class ListEntry {
     @Column(name = "proposed_at", nullable = false)
     private Instant proposedAt;
 
+    /** Who last moved the entry to QUALIFYING; null until someone has. */
+    @Column(name = "qualified_by", length = 64)
+    private String qualifiedBy;
+
     @Column(name = "changed_by", nullable = false, length = 64)
     private String changedBy;
 
@@ -70,6 +74,9 @@ class ListEntry {
     void moveTo(EntryState to, Long replacedBy, String by, Instant at) {
         this.state = to;
         this.replacedByEntryId = replacedBy;
+        if (to == EntryState.QUALIFYING) {
+            this.qualifiedBy = by;
+        }
         touch(by, at);
     }
 
@@ -117,6 +124,10 @@ class ListEntry {
 
     Instant getProposedAt() {
         return proposedAt;
+    }
+
+    String getQualifiedBy() {
+        return qualifiedBy;
     }
 
     String getChangedBy() {

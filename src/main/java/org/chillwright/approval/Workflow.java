@@ -8,13 +8,15 @@ import static org.chillwright.approval.EntryState.RESTRICTED;
 
 import java.util.EnumSet;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import org.chillwright.account.Role;
 
 /**
- * The fixed sign-off rules: which moves the states allow, and which roles may move an entry into
- * each state. Rejection is the move from {@code QUALIFYING} back to {@code PROPOSED}. An approved
- * part may go straight to {@code OBSOLETE} when its supplier ends it without a restricted phase.
+ * The sign-off rules: which moves the states allow, which roles may move an entry into each state,
+ * and the four-eyes rule (an approver is neither the entry's proposer nor its qualifier). Rejection is
+ * the move from {@code QUALIFYING} back to {@code PROPOSED}. An approved part may go straight to
+ * {@code OBSOLETE} when its supplier ends it without a restricted phase.
  */
 final class Workflow {
 
@@ -50,6 +52,29 @@ final class Workflow {
 
     static boolean roleAllows(Actor actor, EntryState to) {
         return actor.holdsAny(MOVERS.get(to));
+    }
+
+    /**
+     * The four-eyes rule: an entry moves to {@code APPROVED} only by someone who neither proposed it nor
+     * moved it to {@code QUALIFYING}. Says why this person may not make this move, or is empty when they may
+     * (always empty when the team has relaxed the rule).
+     *
+     * @param qualifiedBy who last moved the entry to QUALIFYING, or null
+     */
+    static Optional<String> fourEyesRefusal(EntryState to, String proposedBy, String qualifiedBy, Actor actor,
+            boolean fourEyes) {
+        if (!fourEyes || to != APPROVED) {
+            return Optional.empty();
+        }
+        boolean proposed = actor.username().equals(proposedBy);
+        boolean qualified = actor.username().equals(qualifiedBy);
+        if (!proposed && !qualified) {
+            return Optional.empty();
+        }
+        String what = proposed && qualified ? "proposed this entry and sent it to qualification"
+                : proposed ? "proposed this entry" : "sent this entry to qualification";
+        return Optional.of("Approval needs a second person: you " + what + ", so someone other than its proposer ("
+                + proposedBy + ") and its qualifier (" + qualifiedBy + ") must approve it");
     }
 
     /** The moves this person could make from this state, for offering them on the page. */

@@ -23,6 +23,7 @@ import org.springframework.web.method.annotation.HandlerMethodValidationExceptio
 import org.springframework.web.method.annotation.MethodArgumentTypeMismatchException;
 import org.springframework.web.servlet.mvc.method.annotation.ResponseEntityExceptionHandler;
 import tools.jackson.core.JacksonException;
+import tools.jackson.core.exc.StreamReadException;
 import tools.jackson.databind.exc.InvalidFormatException;
 import tools.jackson.databind.exc.MismatchedInputException;
 import tools.jackson.databind.exc.UnrecognizedPropertyException;
@@ -30,7 +31,8 @@ import tools.jackson.databind.exc.UnrecognizedPropertyException;
 /**
  * Turns bad input on the API into 400 {@code application/problem+json} with an {@code errors} array
  * naming each bad field, unknown ids into 404 and stale or clashing edits into 409. Input never
- * reaches the user as a 500.
+ * reaches the user as a 500. A message may say what came in, except for a secret field
+ * ({@link SecretFields}): a password or token is never echoed.
  */
 @RestControllerAdvice(annotations = RestController.class)
 public class ApiErrorAdvice extends ResponseEntityExceptionHandler {
@@ -41,8 +43,10 @@ public class ApiErrorAdvice extends ResponseEntityExceptionHandler {
     protected ResponseEntity<Object> handleMethodArgumentNotValid(MethodArgumentNotValidException ex,
             HttpHeaders headers, HttpStatusCode status, WebRequest request) {
         var problems = new ArrayList<FieldProblem>();
+        Object target = ex.getBindingResult().getTarget();
+        Class<?> type = target != null ? target.getClass() : ex.getParameter().getParameterType();
         for (FieldError error : ex.getBindingResult().getFieldErrors()) {
-            problems.add(new FieldProblem(error.getField(), describe(error)));
+            problems.add(new FieldProblem(error.getField(), describe(error, type)));
         }
         ex.getBindingResult().getGlobalErrors()
                 .forEach(e -> problems.add(new FieldProblem(e.getObjectName(), e.getDefaultMessage())));
@@ -65,11 +69,18 @@ public class ApiErrorAdvice extends ResponseEntityExceptionHandler {
         Throwable cause = ex.getMostSpecificCause();
         if (cause instanceof JacksonException jackson && !jackson.getPath().isEmpty()) {
             String field = jsonPath(jackson.getPath());
-            return badRequest(List.of(new FieldProblem(field, describe(jackson))));
+            return badRequest(List.of(new FieldProblem(field, describe(jackson, secret(jackson.getPath())))));
         }
-        String message = cause instanceof JacksonException jackson
-                ? "the body is not valid JSON: " + plainJacksonMessage(jackson)
-                : "a JSON body is required";
+        String message;
+        if (cause instanceof StreamReadException syntax) {
+            // the parser's own message quotes the broken text, which may be a password typed without quotes
+            message = "the body is not valid JSON" + where(syntax);
+        } else if (cause instanceof MismatchedInputException mismatch && mismatch.getTargetType() != null) {
+            message = "expected " + expectation(mismatch.getTargetType());
+        } else {
+            message = cause instanceof JacksonException ? "the body is not valid JSON for this request"
+                    : "a JSON body is required";
+        }
         return badRequest(List.of(new FieldProblem("body", message)));
     }
 
@@ -78,8 +89,9 @@ public class ApiErrorAdvice extends ResponseEntityExceptionHandler {
             HttpStatusCode status, WebRequest request) {
         String field = ex instanceof MethodArgumentTypeMismatchException m ? m.getName() : ex.getPropertyName();
         String expected = ex.getRequiredType() == null ? "another type" : ex.getRequiredType().getSimpleName();
+        String got = SecretFields.namedLikeSecret(field) ? "" : ", got '" + ex.getValue() + "'";
         return badRequest(List.of(new FieldProblem(field,
-                "expected " + article(expected) + " " + expected.toLowerCase() + ", got '" + ex.getValue() + "'")));
+                "expected " + article(expected) + " " + expected.toLowerCase() + got)));
     }
 
     @Override
@@ -125,7 +137,7 @@ public class ApiErrorAdvice extends ResponseEntityExceptionHandler {
     @ExceptionHandler(ConflictException.class)
     ProblemDetail conflict(ConflictException ex) {
         var problem = ProblemDetail.forStatusAndDetail(HttpStatus.CONFLICT, ex.getMessage());
-        problem.setTitle("Conflict");
+        problem.setTitle(ex.title());
         if (ex.field() != null) {
             problem.setProperty(ERRORS, List.of(new FieldProblem(ex.field(), ex.getMessage())));
         }
@@ -142,11 +154,26 @@ public class ApiErrorAdvice extends ResponseEntityExceptionHandler {
                 .body(problem);
     }
 
-    private static String describe(FieldError error) {
+    /** The message, and what came in unless the field is secret ({@link SecretFields}): a secret is never echoed. */
+    private static String describe(FieldError error, Class<?> type) {
+        boolean secret = SecretFields.isSecret(type, error.getField());
         if (error.isBindingFailure()) {
-            return "could not be read from '" + error.getRejectedValue() + "'";
+            return secret ? "could not be read" : "could not be read from '" + error.getRejectedValue() + "'";
         }
-        return error.getDefaultMessage() + (error.getRejectedValue() == null ? "" : ", was " + error.getRejectedValue());
+        return error.getDefaultMessage()
+                + (secret || error.getRejectedValue() == null ? "" : ", was " + error.getRejectedValue());
+    }
+
+    /** Whether the JSON value at this path belongs to a secret field of the object being read. */
+    private static boolean secret(List<JacksonException.Reference> path) {
+        for (var reference : path) {
+            Object from = reference.from();
+            Class<?> type = from instanceof Class<?> c ? c : from == null ? null : from.getClass();
+            if (reference.getPropertyName() != null && SecretFields.isSecret(type, reference.getPropertyName())) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static String jsonPath(List<JacksonException.Reference> path) {
@@ -165,18 +192,28 @@ public class ApiErrorAdvice extends ResponseEntityExceptionHandler {
     }
 
     /** What was wrong with one JSON value, in words that name the expectation and what came in. */
-    private static String describe(JacksonException ex) {
+    private static String describe(JacksonException ex, boolean secret) {
+        if (ex instanceof StreamReadException syntax) {
+            return "is not valid JSON" + where(syntax);
+        }
         if (ex instanceof UnrecognizedPropertyException unknown) {
             return "is not a field of this request (known fields: " + unknown.getKnownPropertyIds().stream()
                     .map(String::valueOf).sorted().collect(Collectors.joining(", ")) + ")";
         }
         if (ex instanceof InvalidFormatException format) {
-            return "expected " + expectation(format.getTargetType()) + ", got '" + format.getValue() + "'";
+            return "expected " + expectation(format.getTargetType()) + (secret ? "" : ", got '" + format.getValue() + "'");
         }
         if (ex instanceof MismatchedInputException mismatch && mismatch.getTargetType() != null) {
             return "expected " + expectation(mismatch.getTargetType());
         }
-        return plainJacksonMessage(ex);
+        return secret ? "could not be read" : plainJacksonMessage(ex);
+    }
+
+    /** Where in the body the parser stopped, without quoting what it found there. */
+    private static String where(JacksonException ex) {
+        var location = ex.getLocation();
+        return location == null || location.getLineNr() < 1 ? ""
+                : " (line " + location.getLineNr() + ", column " + location.getColumnNr() + ")";
     }
 
     private static String expectation(Class<?> type) {

@@ -18,4 +18,9 @@ public class ConflictException extends RuntimeException {
     public String field() {
         return field;
     }
+
+    /** The problem body's title: a short name for the kind of clash. */
+    public String title() {
+        return "Conflict";
+    }
 }

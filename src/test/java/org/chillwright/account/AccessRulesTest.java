@@ -80,7 +80,7 @@ class AccessRulesTest {
 
     @Test
     void roleWithoutAdminIsForbiddenToCreateUsers() throws Exception {
-        accounts.create("eng-only", "eng-only-password", EnumSet.of(Role.ENGINEER));
+        accounts.create("eng-only", "eng-only-password", EnumSet.of(Role.ENGINEER), "test-setup");
         mvc.perform(post("/api/v1/users").with(httpBasic("eng-only", "eng-only-password"))
                         .contentType(MediaType.APPLICATION_JSON).content(NEW_USER.formatted("x3")))
                 .andExpect(status().isForbidden())

@@ -45,7 +45,7 @@ class LoginThrottlingTest {
 
     @Test
     void formLoginIsPausedAfterTooManyFailures() throws Exception {
-        accounts.create("throttle-a", PASSWORD, EnumSet.of(Role.ENGINEER));
+        accounts.create("throttle-a", PASSWORD, EnumSet.of(Role.ENGINEER), "test-setup");
         failFormLogins("throttle-a", "192.0.2.1", 3);
         mvc.perform(post("/login").with(csrf()).with(from("192.0.2.1")).param("username", "throttle-a")
                         .param("password", PASSWORD))
@@ -55,7 +55,7 @@ class LoginThrottlingTest {
 
     @Test
     void basicAuthIsAnsweredWith429AndRetryAfterOnceTheNameIsLocked() throws Exception {
-        accounts.create("throttle-b", PASSWORD, EnumSet.of(Role.ENGINEER));
+        accounts.create("throttle-b", PASSWORD, EnumSet.of(Role.ENGINEER), "test-setup");
         failFormLogins("throttle-b", "192.0.2.2", 3);
         mvc.perform(get("/api/v1/lists").with(from("192.0.2.3")).with(httpBasic("throttle-b", PASSWORD)))
                 .andExpect(status().isTooManyRequests())
@@ -65,7 +65,7 @@ class LoginThrottlingTest {
 
     @Test
     void anAddressThatGuessesManyNamesIsPaused() throws Exception {
-        accounts.create("throttle-c", PASSWORD, EnumSet.of(Role.ENGINEER));
+        accounts.create("throttle-c", PASSWORD, EnumSet.of(Role.ENGINEER), "test-setup");
         for (int i = 0; i < 6; i++) {
             failFormLogins("nobody-" + i, "192.0.2.4", 1);
         }
@@ -76,7 +76,7 @@ class LoginThrottlingTest {
 
     @Test
     void failuresBelowTheLimitStillLetTheRightPasswordIn() throws Exception {
-        accounts.create("throttle-d", PASSWORD, EnumSet.of(Role.ENGINEER));
+        accounts.create("throttle-d", PASSWORD, EnumSet.of(Role.ENGINEER), "test-setup");
         failFormLogins("throttle-d", "192.0.2.5", 2);
         mvc.perform(post("/login").with(csrf()).with(from("192.0.2.5")).param("username", "throttle-d")
                         .param("password", PASSWORD))

@@ -44,7 +44,8 @@ class PasswordNeverLoggedTest {
         mvc.perform(formLogin("/login").user("admin").password(SECRET));
         mvc.perform(formLogin("/login").user("admin").password(SECRET + "-typo"));
         mvc.perform(get("/api/v1/lists").with(httpBasic("admin", SECRET)));
-        long someone = accounts.create("log-check", "log-check-password", java.util.Set.of(Role.ENGINEER)).id();
+        long someone = accounts.create("log-check", "log-check-password", java.util.Set.of(Role.ENGINEER), "test-setup")
+                .id();
         mvc.perform(post("/admin/users/{id}/password", someone).with(user("admin").roles("ADMIN")).with(csrf())
                 .param("password", SECRET + "-reset"));
         assertThat(output.getAll()).contains("Created account 'admin'").doesNotContain(SECRET);

@@ -6,10 +6,15 @@ import java.util.concurrent.atomic.AtomicLong;
 import org.chillwright.account.AccountService;
 import org.chillwright.account.Role;
 
-/** Lists and entries in a wanted state, made through the service the way people would make them. */
+/**
+ * Lists and entries in a wanted state, made through the service the way people would make them: an
+ * administrator proposes and qualifies, and a second person approves, as the four-eyes rule wants.
+ */
 public final class ApprovalFixtures {
 
     public static final Actor ADMIN = new Actor("admin", EnumSet.allOf(Role.class));
+    /** The second pair of eyes: approves, restricts and obsoletes what {@link #ADMIN} proposed. */
+    public static final Actor APPROVER = new Actor("fixture-approver", EnumSet.of(Role.APPROVER));
     public static final String PASSWORD = "fixture-password-1";
     private static final AtomicLong SEQUENCE = new AtomicLong(System.nanoTime() % 1_000_000);
 
@@ -25,11 +30,15 @@ public final class ApprovalFixtures {
         return lists.create(unique("Line"), "invented product line", ADMIN);
     }
 
-    /** An entry for module {@code moduleId} on {@code listId}, walked by an admin to state {@code state}. */
+    /**
+     * An entry for module {@code moduleId} on {@code listId} in state {@code state}: proposed and qualified
+     * by {@link #ADMIN}, approved and later moved by {@link #APPROVER}.
+     */
     public static EntryView entryIn(ApprovedListService lists, long listId, long moduleId, EntryState state) {
         var entry = lists.propose(listId, moduleId, "fixture", ADMIN);
         for (var step : pathTo(state)) {
-            entry = lists.transition(listId, entry.id(), step, "fixture step", null, null, ADMIN);
+            var by = step == EntryState.QUALIFYING ? ADMIN : APPROVER;
+            entry = lists.transition(listId, entry.id(), step, "fixture step", null, null, by);
         }
         return entry;
     }
@@ -47,7 +56,7 @@ public final class ApprovalFixtures {
     /** An account with exactly these roles, created on first use. */
     public static String account(AccountService accounts, String username, Set<Role> roles) {
         if (!accounts.exists(username)) {
-            accounts.create(username, PASSWORD, roles);
+            accounts.create(username, PASSWORD, roles, "test-setup");
         }
         return username;
     }

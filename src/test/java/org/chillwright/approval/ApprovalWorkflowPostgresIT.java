@@ -59,7 +59,8 @@ class ApprovalWorkflowPostgresIT {
     void staleTransitionIsRefused() {
         var list = newList(lists);
         var entry = entryIn(lists, list.id(), TestModuleDirectory.ACTIVE, EntryState.QUALIFYING);
-        lists.transition(list.id(), entry.id(), EntryState.APPROVED, "first", entry.version(), null, ADMIN);
+        lists.transition(list.id(), entry.id(), EntryState.APPROVED, "first", entry.version(), null,
+                ApprovalFixtures.APPROVER);
         assertThatThrownBy(() -> lists.transition(list.id(), entry.id(), EntryState.PROPOSED, "second", entry.version(),
                 null, ADMIN)).isInstanceOf(StaleEditException.class);
     }

@@ -11,13 +11,13 @@ class AuditCsvTest {
 
     private static final Instant AT = Instant.parse("2026-03-02T09:00:00Z");
     private static final EntryView ENTRY = new EntryView(7, 1, 101, "Example Thermal Ltd", "EXT-071-10", "ACTIVE",
-            EntryState.QUALIFYING, null, null, null, "eng", AT, "eng", AT);
+            EntryState.QUALIFYING, null, null, null, "eng", AT, "eng", AT, "eng");
     private static final ListView LIST = new ListView(3, 0, "Line", null, "eng", AT, "eng", AT, List.of(ENTRY));
 
     private static String csv(String reason) throws Exception {
         var out = new StringBuilder();
         AuditCsv.write(LIST, List.of(new AuditView(AT, "eng", 7L, EntryState.PROPOSED, EntryState.QUALIFYING, reason,
-                "TRANSITION")), out);
+                "TRANSITION", null, null)), out);
         return out.toString();
     }
 

@@ -2,7 +2,6 @@ package org.chillwright.browser;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import java.time.Duration;
 import java.util.EnumSet;
 import org.chillwright.account.AccountService;
 import org.chillwright.account.Role;
@@ -13,7 +12,6 @@ import org.chillwright.catalog.ModuleQuery;
 import org.chillwright.selection.TestCatalog;
 import org.junit.jupiter.api.Test;
 import org.openqa.selenium.By;
-import org.openqa.selenium.WebDriver;
 import org.openqa.selenium.support.ui.ExpectedConditions;
 import org.openqa.selenium.support.ui.Select;
 import org.springframework.beans.factory.annotation.Autowired;
@@ -34,23 +32,6 @@ class ApprovalJourneyIT extends BrowserJourney {
     @Autowired
     CatalogService catalog;
 
-    private void signIn(WebDriver driver, String username) {
-        driver.get(url("/login"));
-        driver.findElement(By.id("username")).sendKeys(username);
-        driver.findElement(By.id("password")).sendKeys(ApprovalFixtures.PASSWORD);
-        driver.findElement(By.cssSelector("main button[type=submit]")).click();
-        browser.waitUpTo(Duration.ofSeconds(10)).until(ExpectedConditions.textToBePresentInElementLocated(
-                By.cssSelector(".who"), username));
-    }
-
-    private void move(WebDriver driver, String entryId, String to, String reason) {
-        new Select(driver.findElement(By.id("to-" + entryId))).selectByValue(to);
-        driver.findElement(By.id("reason-" + entryId)).sendKeys(reason);
-        driver.findElement(By.cssSelector("#entry-" + entryId + " form.transition button")).click();
-        browser.waitUpTo(Duration.ofSeconds(10)).until(ExpectedConditions.textToBePresentInElementLocated(
-                By.cssSelector("#entry-" + entryId + " .state"), to));
-    }
-
     @Test
     void engineerProposesApproverApprovesAndTheListShowsItWithItsAuditTrail() throws Exception {
         TestCatalog.ensure(catalog);
@@ -62,20 +43,15 @@ class ApprovalJourneyIT extends BrowserJourney {
         String listPage = url("/lists/" + list.id());
         var driver = browser.driver();
 
-        signIn(driver, "journey-engineer");
+        signIn("journey-engineer", ApprovalFixtures.PASSWORD);
         driver.get(listPage);
-        driver.findElement(By.id("moduleId")).sendKeys(String.valueOf(moduleId));
-        driver.findElement(By.id("note")).sendKeys("holds 20 °C at 45 °C ambient with the 0.4 K/W sink");
-        driver.findElement(By.cssSelector("section[aria-labelledby=propose] button")).click();
-        var row = browser.waitUpTo(Duration.ofSeconds(10)).until(ExpectedConditions.presenceOfElementLocated(
-                By.cssSelector("tr[id^=entry-]")));
-        String entryId = row.getAttribute("id").substring("entry-".length());
-        move(driver, entryId, "QUALIFYING", "datasheet and outline drawing received");
-        driver.findElement(By.cssSelector(".who button")).click();
+        String entryId = propose(moduleId, "holds 20 °C at 45 °C ambient with the 0.4 K/W sink");
+        move(entryId, "QUALIFYING", "datasheet and outline drawing received");
+        signOut();
 
-        signIn(driver, "journey-approver");
+        signIn("journey-approver", ApprovalFixtures.PASSWORD);
         driver.get(listPage);
-        move(driver, entryId, "APPROVED", "pilot build held the set-point for 72 h");
+        move(entryId, "APPROVED", "pilot build held the set-point for 72 h");
         browser.screenshot("list-approved");
 
         assertThat(driver.findElement(By.cssSelector("#entry-" + entryId + " .changed-by")).getText())
@@ -93,7 +69,7 @@ class ApprovalJourneyIT extends BrowserJourney {
         load.clear();
         load.sendKeys("3");
         driver.findElement(By.cssSelector("button.primary[type=submit]")).click();
-        browser.waitUpTo(Duration.ofSeconds(10)).until(ExpectedConditions.presenceOfElementLocated(
+        browser.waitUpTo(PAGE_LOAD).until(ExpectedConditions.presenceOfElementLocated(
                 By.cssSelector("table.ranking")));
         browser.screenshot("ranking-restricted-to-list");
         assertThat(driver.findElements(By.cssSelector("table.ranking tbody td:nth-child(3)")))

@@ -26,15 +26,6 @@ class CatalogJourneyIT extends BrowserJourney {
     @TempDir
     Path files;
 
-    private void signIn(WebDriver driver) {
-        driver.get(url("/login"));
-        driver.findElement(By.id("username")).sendKeys("admin");
-        driver.findElement(By.id("password")).sendKeys("admin-test-password");
-        driver.findElement(By.cssSelector("button[type=submit]")).click();
-        browser.waitUpTo(PATIENCE).until(ExpectedConditions.textToBePresentInElementLocated(By.cssSelector(".who"),
-                "admin"));
-    }
-
     private static void type(WebDriver driver, String id, String text) {
         var input = driver.findElement(By.id(id));
         input.clear();
@@ -45,7 +36,7 @@ class CatalogJourneyIT extends BrowserJourney {
     void addAModuleSeeItsDerivedValuesAndChartsThenImportABadFile() throws Exception {
         var driver = browser.driver();
         String supplier = "Browser Test Thermal " + UUID.randomUUID().toString().substring(0, 8);
-        signIn(driver);
+        signIn("admin", "admin-test-password");
 
         driver.get(url("/catalog"));
         driver.findElement(By.linkText("Add by ratings")).click();

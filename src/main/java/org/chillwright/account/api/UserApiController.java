@@ -1,18 +1,23 @@
 package org.chillwright.account.api;
 
 import jakarta.validation.Valid;
+import java.security.Principal;
 import org.chillwright.account.AccountService;
 import org.chillwright.account.AccountView;
 import org.springframework.http.HttpStatus;
 import org.springframework.security.access.prepost.PreAuthorize;
+import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
+import org.springframework.web.bind.annotation.PutMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.ResponseStatus;
 import org.springframework.web.bind.annotation.RestController;
 
+/** Accounts, for administrators. */
 @RestController
 @RequestMapping("/api/v1/users")
+@PreAuthorize("hasRole('ADMIN')")
 class UserApiController {
 
     private final AccountService accounts;
@@ -23,8 +28,14 @@ class UserApiController {
 
     @PostMapping
     @ResponseStatus(HttpStatus.CREATED)
-    @PreAuthorize("hasRole('ADMIN')")
-    AccountView create(@Valid @RequestBody CreateUserRequest request) {
-        return accounts.create(request.username(), request.password(), request.roles());
+    AccountView create(@Valid @RequestBody CreateUserRequest request, Principal me) {
+        return accounts.create(request.username(), request.password(), request.roles(), me.getName());
+    }
+
+    /** Sets a new password for someone who lost theirs; their sessions end. */
+    @PutMapping("/{id}/password")
+    @ResponseStatus(HttpStatus.NO_CONTENT)
+    void resetPassword(@PathVariable long id, @Valid @RequestBody PasswordResetRequest request, Principal me) {
+        accounts.resetPassword(id, request.password(), me.getName());
     }
 }

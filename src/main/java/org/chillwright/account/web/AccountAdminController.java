@@ -7,6 +7,7 @@ import java.util.Set;
 import org.chillwright.account.AccountService;
 import org.chillwright.account.Role;
 import org.chillwright.account.api.CreateUserRequest;
+import org.chillwright.account.api.PasswordResetRequest;
 import org.chillwright.web.ConflictException;
 import org.chillwright.web.InvalidRequestException;
 import org.springframework.security.access.prepost.PreAuthorize;
@@ -52,10 +53,10 @@ class AccountAdminController {
 
     @PostMapping
     String create(@Valid @ModelAttribute("newAccount") CreateUserRequest form, BindingResult binding, Model model,
-            RedirectAttributes redirect) {
+            Principal me, RedirectAttributes redirect) {
         if (!binding.hasErrors()) {
             try {
-                accounts.create(form.username(), form.password(), form.roles());
+                accounts.create(form.username(), form.password(), form.roles(), me.getName());
                 redirect.addFlashAttribute("done", "Created the account " + form.username() + ".");
                 return BACK;
             } catch (ConflictException taken) {
@@ -80,14 +81,14 @@ class AccountAdminController {
     }
 
     @PostMapping("/{id}/password")
-    String resetPassword(@PathVariable long id, @Valid PasswordResetForm form, BindingResult binding,
+    String resetPassword(@PathVariable long id, @Valid PasswordResetRequest form, BindingResult binding, Principal me,
             RedirectAttributes redirect) {
         if (binding.hasErrors()) {
             redirect.addFlashAttribute("problemId", id);
             redirect.addFlashAttribute("problem", "New password " + binding.getFieldError("password").getDefaultMessage());
             return BACK;
         }
-        return act(id, redirect, () -> accounts.resetPassword(id, form.password()),
+        return act(id, redirect, () -> accounts.resetPassword(id, form.password(), me.getName()),
                 "Password reset. Tell the user through a channel other than e-mail, and ask them to change it.");
     }
 

@@ -7,6 +7,7 @@ import org.chillwright.web.InvalidRequestException;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.validation.BindingResult;
+import org.springframework.validation.FieldError;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.ModelAttribute;
 import org.springframework.web.bind.annotation.PostMapping;
@@ -36,7 +37,7 @@ class OwnPasswordController {
     String change(@Valid @ModelAttribute("form") PasswordChangeForm form, BindingResult binding, Principal me,
             RedirectAttributes redirect) {
         if (!binding.hasFieldErrors("newPassword") && !form.newPassword().equals(form.confirmPassword())) {
-            binding.rejectValue("confirmPassword", "mismatch", "does not match the new password");
+            reject(binding, "confirmPassword", "does not match the new password");
         }
         if (binding.hasErrors()) {
             return VIEW;
@@ -44,10 +45,15 @@ class OwnPasswordController {
         try {
             accounts.changeOwnPassword(me.getName(), form.currentPassword(), form.newPassword());
         } catch (InvalidRequestException wrong) {
-            binding.rejectValue("currentPassword", "wrong", wrong.problems().get(0).message());
+            reject(binding, "currentPassword", wrong.problems().get(0).message());
             return VIEW;
         }
         redirect.addFlashAttribute("done", "Your password has been changed.");
         return "redirect:/account/password";
+    }
+
+    /** Like {@code rejectValue}, but keeps no copy of the password that was typed. */
+    private static void reject(BindingResult binding, String field, String message) {
+        binding.addError(new FieldError(binding.getObjectName(), field, null, false, null, null, message));
     }
 }

@@ -2,10 +2,19 @@ package org.chillwright.account.web;
 
 import jakarta.validation.constraints.NotBlank;
 import jakarta.validation.constraints.Size;
+import org.chillwright.account.Passwords;
+import org.chillwright.web.Secret;
+import org.chillwright.web.SecretFields;
 
-/** A user's own password change: the current one proves it is them. */
+/** A user's own password change: the current one proves it is them. None of the three is ever shown again. */
 record PasswordChangeForm(
-        @NotBlank String currentPassword,
-        @NotBlank @Size(min = 12, max = 128, message = "must be 12 to 128 characters long") String newPassword,
-        @NotBlank String confirmPassword) {
+        @Secret @NotBlank String currentPassword,
+        @Secret @NotBlank @Size(min = Passwords.MIN_LENGTH, max = Passwords.MAX_LENGTH,
+                message = Passwords.LENGTH_MESSAGE) String newPassword,
+        @Secret @NotBlank String confirmPassword) {
+
+    @Override
+    public String toString() {
+        return SecretFields.toString(this);
+    }
 }

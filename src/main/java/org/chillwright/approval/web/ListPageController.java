@@ -97,6 +97,8 @@ class ListPageController {
         }
         model.addAttribute("list", list);
         model.addAttribute("targets", targets);
+        model.addAttribute("fourEyesNotes", lists.fourEyesNotes(actor, list.entries()));
+        model.addAttribute("fourEyes", lists.fourEyesApproval());
         model.addAttribute("audit", lists.audit(id));
         model.addAttribute("mayEdit", lists.mayEditLists(actor));
         model.addAttribute("mayPropose", lists.mayPropose(actor));

@@ -203,9 +203,9 @@ class CatalogPageController {
 
     @PostMapping("/import/apply")
     @PreAuthorize(WRITERS)
-    String apply(@RequestParam String token, HttpSession session, Principal who, Model model) {
+    String apply(@RequestParam String previewId, HttpSession session, Principal who, Model model) {
         model.addAttribute("columns", ModuleText.COLUMNS);
-        if (!(session.getAttribute(PENDING_IMPORT) instanceof PendingImport pending) || !pending.token().equals(token)) {
+        if (!(session.getAttribute(PENDING_IMPORT) instanceof PendingImport pending) || !previewId.equals(pending.previewId())) {
             model.addAttribute("fileError", "That preview has expired: upload the file again.");
             return "catalog/import";
         }

@@ -40,7 +40,7 @@ class AccountAdminPageTest {
     }
 
     private AccountView someone(String name) {
-        return accounts.create(name, PASSWORD, EnumSet.of(Role.ENGINEER));
+        return accounts.create(name, PASSWORD, EnumSet.of(Role.ENGINEER), "test-setup");
     }
 
     private void assertSignInWorks(String name, String password, boolean works) throws Exception {

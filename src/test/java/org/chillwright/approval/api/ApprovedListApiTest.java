@@ -319,7 +319,7 @@ class ApprovedListApiTest {
                 .andExpect(status().isOk())
                 .andExpect(header().string("Content-Disposition", containsString("audit-list-" + list.id() + ".csv")))
                 .andExpect(content().string(org.hamcrest.Matchers.startsWith(
-                        "at,by,entryId,moduleId,partNumber,action,from,to,reason\r\n")))
+                        "at,by,entryId,moduleId,partNumber,action,from,to,reason,proposedBy,qualifiedBy\r\n")))
                 .andExpect(content().string(containsString(",admin,")))
                 .andExpect(content().string(containsString("EXT-071-10,TRANSITION,PROPOSED,QUALIFYING,fixture step")));
     }

@@ -49,8 +49,8 @@ class ModuleApiControllerTest {
     @BeforeEach
     void accountsAndAFreshSupplier() {
         if (!accounts.exists(ENGINEER)) {
-            accounts.create(ENGINEER, PASSWORD, EnumSet.of(Role.ENGINEER));
-            accounts.create(BUYER, PASSWORD, EnumSet.of(Role.PURCHASING));
+            accounts.create(ENGINEER, PASSWORD, EnumSet.of(Role.ENGINEER), "test-setup");
+            accounts.create(BUYER, PASSWORD, EnumSet.of(Role.PURCHASING), "test-setup");
         }
         supplier = "Frostline Components " + UUID.randomUUID();
     }

@@ -172,9 +172,9 @@ class CatalogPagesTest {
         var preview = upload(csv, session)
                 .andExpect(content().string(containsString("1 new, 0 updated, 0 unchanged")))
                 .andReturn().getResponse().getContentAsString();
-        String token = preview.replaceAll("(?s).*name=\"token\" value=\"([^\"]+)\".*", "$1");
+        String previewId = preview.replaceAll("(?s).*name=\"previewId\" value=\"([^\"]+)\".*", "$1");
 
-        mvc.perform(post("/catalog/import/apply").param("token", token).session(session).with(engineer()).with(csrf()))
+        mvc.perform(post("/catalog/import/apply").param("previewId", previewId).session(session).with(engineer()).with(csrf()))
                 .andExpect(status().isOk())
                 .andExpect(content().string(containsString("Imported")));
         assertThat(stored()).isEqualTo(1);
