@@ -4,7 +4,7 @@ package org.chillwright.physics;
  * A cooling requirement with its thermal path, resistances in series:
  * object —coldInterface— cold face | module | hot face —hotInterface— sink base —sink— ambient.
  *
- * @param objectK                 object set-point temperature, K, &gt; 0
+ * @param setPointK                 object set-point temperature, K, &gt; 0
  * @param ambientK                ambient (sink air or coolant) temperature, K, &gt; 0
  * @param heatLoadW               heat to remove from the object (active plus parasitic), W, ≥ 0
  * @param sinkResistanceKPerW     heat-sink resistance to ambient, K/W, ≥ 0
@@ -13,11 +13,11 @@ package org.chillwright.physics;
  * @param relativeHumidity        relative humidity of the ambient air as a fraction (0, 1], or NaN
  *                                when unknown; used only for the condensation warning
  */
-public record CoolingCase(double objectK, double ambientK, double heatLoadW, double sinkResistanceKPerW,
+public record CoolingCase(double setPointK, double ambientK, double heatLoadW, double sinkResistanceKPerW,
                           double coldInterfaceKPerW, double hotInterfaceKPerW, double relativeHumidity) {
 
     public CoolingCase {
-        Check.positive("objectK", objectK);
+        Check.positive("setPointK", setPointK);
         Check.positive("ambientK", ambientK);
         Check.nonNegative("heatLoadW", heatLoadW);
         Check.nonNegative("sinkResistanceKPerW", sinkResistanceKPerW);
@@ -29,20 +29,20 @@ public record CoolingCase(double objectK, double ambientK, double heatLoadW, dou
     }
 
     /** A case without humidity information. */
-    public CoolingCase(double objectK, double ambientK, double heatLoadW, double sinkResistanceKPerW,
+    public CoolingCase(double setPointK, double ambientK, double heatLoadW, double sinkResistanceKPerW,
                        double coldInterfaceKPerW, double hotInterfaceKPerW) {
-        this(objectK, ambientK, heatLoadW, sinkResistanceKPerW, coldInterfaceKPerW, hotInterfaceKPerW, Double.NaN);
+        this(setPointK, ambientK, heatLoadW, sinkResistanceKPerW, coldInterfaceKPerW, hotInterfaceKPerW, Double.NaN);
     }
 
     /** The same case with the ambient relative humidity (fraction, (0, 1]). */
     public CoolingCase withRelativeHumidity(double relativeHumidity) {
-        return new CoolingCase(objectK, ambientK, heatLoadW, sinkResistanceKPerW, coldInterfaceKPerW,
+        return new CoolingCase(setPointK, ambientK, heatLoadW, sinkResistanceKPerW, coldInterfaceKPerW,
                 hotInterfaceKPerW, relativeHumidity);
     }
 
     /** The same case with another heat load, W, ≥ 0. */
     public CoolingCase withHeatLoadW(double heatLoadW) {
-        return new CoolingCase(objectK, ambientK, heatLoadW, sinkResistanceKPerW, coldInterfaceKPerW,
+        return new CoolingCase(setPointK, ambientK, heatLoadW, sinkResistanceKPerW, coldInterfaceKPerW,
                 hotInterfaceKPerW, relativeHumidity);
     }
 
@@ -58,6 +58,6 @@ public record CoolingCase(double objectK, double ambientK, double heatLoadW, dou
 
     /** Cold-face temperature needed to hold the object at its set-point with this load, K: Tc = Tobj − Q·Rint,c. */
     public double coldSideAtLoadK() {
-        return objectK - heatLoadW * coldInterfaceKPerW;
+        return setPointK - heatLoadW * coldInterfaceKPerW;
     }
 }

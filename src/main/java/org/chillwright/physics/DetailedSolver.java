@@ -113,7 +113,7 @@ public final class DetailedSolver {
         if (!(tc > 0)) {
             return new Infeasible(Reason.DELTA_T_BEYOND_REACH, format(
                     "holding the object at %.2f K with %.2f W would need the cold face at %.2f K, at or below 0 K",
-                    coolingCase.objectK(), coolingCase.heatLoadW(), tc));
+                    coolingCase.setPointK(), coolingCase.heatLoadW(), tc));
         }
         Cooler cooler = new Cooler(model(array), coolingCase, array);
         double[] point = cooler.currentForLoad();
@@ -140,7 +140,7 @@ public final class DetailedSolver {
         boolean within = m.withinMaterialRange();
         double[] capacity = cooler.capacityAtObject(currentA, hotK);
         return new DetailedPoint(currentA, voltageV, powerW, powerW > 0 ? loadW / powerW : Double.POSITIVE_INFINITY,
-                coolingCase.objectK(), tc, hotK, heatRejectedW, loadW, capacity[0], capacity[1], lowestK, highestK,
+                coolingCase.setPointK(), tc, hotK, heatRejectedW, loadW, capacity[0], capacity[1], lowestK, highestK,
                 within, array.module().material().name());
     }
 
@@ -151,7 +151,7 @@ public final class DetailedSolver {
         final double tamb;
         final double rh;
         final double rc;
-        final double objectK;
+        final double setPointK;
         final double loadW;
         final double currentScaleA;
         final double highestCurrentA;
@@ -163,7 +163,7 @@ public final class DetailedSolver {
             tamb = c.ambientK();
             rh = c.hotPathKPerW();
             rc = c.coldInterfaceKPerW();
-            objectK = c.objectK();
+            setPointK = c.setPointK();
             loadW = c.heatLoadW();
             // the lumped model at the mean temperature gives the scales and the starting point
             ModuleArray first = array.lumpedAt(0.5 * (tc + tamb));
@@ -400,7 +400,7 @@ public final class DetailedSolver {
             double scaleW = Math.max(1e-3, Math.abs(loadW));
             double previous = Double.POSITIVE_INFINITY;
             for (int n = 0; n < MAX_ITERATIONS; n++) {
-                double coldK = objectK - q * rc;
+                double coldK = setPointK - q * rc;
                 if (!(coldK > 0) || !model.solve(i, coldK, th)) {
                     return null;
                 }

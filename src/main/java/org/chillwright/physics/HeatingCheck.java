@@ -51,7 +51,7 @@ public final class HeatingCheck {
 
     /**
      * @param module         the (array's equivalent) module
-     * @param objectK        set-point, K
+     * @param setPointK        set-point, K
      * @param coldAmbientK   the coldest ambient, K
      * @param heatNeededW    heat the object must receive from the module there, W: its losses elsewhere minus
      *                       its own dissipation (negative when it still dissipates more than it loses)
@@ -59,14 +59,14 @@ public final class HeatingCheck {
      * @param hotPathKPerW   sink-side path (hot interface + heat sink), K/W
      * @param currentLimitA  most current allowed, A (rated Imax, supply), or NaN for none
      */
-    public Result check(ModuleParameters module, double objectK, double coldAmbientK, double heatNeededW,
+    public Result check(ModuleParameters module, double setPointK, double coldAmbientK, double heatNeededW,
                         double coldInterfaceKPerW, double hotPathKPerW, double currentLimitA) {
-        Check.positive("objectK", objectK);
+        Check.positive("setPointK", setPointK);
         Check.positive("coldAmbientK", coldAmbientK);
         Check.finite("heatNeededW", heatNeededW);
         Check.nonNegative("coldInterfaceKPerW", coldInterfaceKPerW);
         Check.nonNegative("hotPathKPerW", hotPathKPerW);
-        double th = objectK + heatNeededW * coldInterfaceKPerW; // Th, the object-side face
+        double th = setPointK + heatNeededW * coldInterfaceKPerW; // Th, the object-side face
         double s = module.seebeckVPerK();
         double r = module.resistanceOhm();
         double k = module.conductanceWPerK();

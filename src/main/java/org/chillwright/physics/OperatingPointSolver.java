@@ -75,7 +75,7 @@ public final class OperatingPointSolver {
     }
 
     /**
-     * Current that removes {@code heatLoadW} from the object held at {@code objectK}.
+     * Current that removes {@code heatLoadW} from the object held at {@code setPointK}.
      * Returns the lower root of Qc(I) = Qload (low current, low power, high COP; the upper root is
      * on the over-driven side and never returned), I = 0 when conduction alone carries the load
      * (passive case), or {@link Infeasible} with {@link Reason#DELTA_T_BEYOND_REACH},
@@ -103,7 +103,7 @@ public final class OperatingPointSolver {
             return new Infeasible(Reason.DELTA_T_BEYOND_REACH, format(
                     "holding the object at %.2f K with %.2f W through %.3f K/W would need the cold face at %.2f K,"
                             + " at or below absolute zero",
-                    coolingCase.objectK(), loadW, coolingCase.coldInterfaceKPerW(), coldK));
+                    coolingCase.setPointK(), loadW, coolingCase.coldInterfaceKPerW(), coldK));
         }
         double currentA = currentForLoadA(s, r, k, coldK, ambientK, rh, loadW);
         if (Double.isNaN(currentA)) {
@@ -115,7 +115,7 @@ public final class OperatingPointSolver {
         if (overLimit != null) {
             return overLimit;
         }
-        return complete(array, module, coolingCase, limits, currentA, voltageV, coldK, hotK, coolingCase.objectK(),
+        return complete(array, module, coolingCase, limits, currentA, voltageV, coldK, hotK, coolingCase.setPointK(),
                 false);
     }
 
@@ -124,7 +124,7 @@ public final class OperatingPointSolver {
      * case S12): the linear 2x2 system
      * (S·I + K)Tc − K·Th = Q + ½RI², −Rh·K·Tc + (1 + Rh·K − Rh·S·I)Th = Tamb + ½Rh·R·I², by Cramer's
      * rule; Tobj = Tc + Rint,c·Q. Its determinant is K + S·I − Rh·S²·I²; at or below zero there is no
-     * steady state ({@link Reason#HEAT_SINK_RUNAWAY}). The case's {@code objectK} is not used.
+     * steady state ({@link Reason#HEAT_SINK_RUNAWAY}). The case's {@code setPointK} is not used.
      *
      * @param currentA terminal current, A, ≥ 0
      */
@@ -155,15 +155,15 @@ public final class OperatingPointSolver {
         if (overLimit != null) {
             return overLimit;
         }
-        double objectK = coldK + coolingCase.coldInterfaceKPerW() * coolingCase.heatLoadW();
-        return complete(array, module, coolingCase, limits, currentA, voltageV, coldK, hotK, objectK, true);
+        double setPointK = coldK + coolingCase.coldInterfaceKPerW() * coolingCase.heatLoadW();
+        return complete(array, module, coolingCase, limits, currentA, voltageV, coldK, hotK, setPointK, true);
     }
 
     /**
      * Object temperature reached at a fixed terminal voltage with the case's load:
      * a 1-D root in I of S(Th − Tc) + I·R = V with (Tc, Th) from the fixed-current system, found by
      * Brent's method on a bracket from 0 (where the voltage is at most 0) to a current where it
-     * exceeds V. The case's {@code objectK} is not used.
+     * exceeds V. The case's {@code setPointK} is not used.
      *
      * @param voltageV terminal voltage, V, &gt; 0
      */
@@ -419,29 +419,29 @@ public final class OperatingPointSolver {
     }
 
     /**
-     * Most heat removable with the object held at {@code objectK}: the root Q of
+     * Most heat removable with the object held at {@code setPointK}: the root Q of
      * Qpk(Tobj − Q·Rint,c) = Q, by 2-D Newton on the peak from (seedA, seedK). A seed extrapolated
      * far from the solved point can leave the domain; then the 2-D Newton starts again from the
      * bracketed peak at the cold face Tobj − startW·Rint,c. If that fails too, Newton in Q with slope
      * −(1 + Rint,c·∂Qc/∂Tc) from {@code startW}; Qpk is convex in Tc (a maximum of affine functions),
      * so from a start with Qpk(…) ≥ Q the iterates rise monotonically.
      */
-    static PeakPoint capacityAtObject(double s, double r, double k, double objectK, double rc, double tamb,
+    static PeakPoint capacityAtObject(double s, double r, double k, double setPointK, double rc, double tamb,
                                       double rh, double startW, double seedA, double seedK) {
         // Tc + Rint,c·Qc(I, Tc) = Tobj on the peak dQc/dI = 0
-        PeakPoint peak = peakOnLine(s, r, k, tamb, rh, 1, rc, objectK, seedA, seedK);
+        PeakPoint peak = peakOnLine(s, r, k, tamb, rh, 1, rc, setPointK, seedA, seedK);
         if (peak != null) {
             return peak;
         }
-        double startK = objectK - startW * rc;
-        peak = peakOnLine(s, r, k, tamb, rh, 1, rc, objectK, peakCurrentA(s, r, k, startK, tamb, rh, seedA), startK);
+        double startK = setPointK - startW * rc;
+        peak = peakOnLine(s, r, k, tamb, rh, 1, rc, setPointK, peakCurrentA(s, r, k, startK, tamb, rh, seedA), startK);
         if (peak != null) {
             return peak;
         }
         double q = startW;
         double peakA = seedA;
         for (int n = 0; n < MAX_ITERATIONS; n++) {
-            double tc = objectK - q * rc;
+            double tc = setPointK - q * rc;
             peakA = peakCurrentA(s, r, k, tc, tamb, rh, peakA);
             double surplusW = coldHeatW(s, r, k, tc, tamb, rh, peakA) - q;
             double slope = 1 + rc * coldSideSensitivityWPerK(s, k, rh, peakA);
@@ -451,7 +451,7 @@ public final class OperatingPointSolver {
                 break;
             }
         }
-        return PeakPoint.at(s, r, k, tamb, rh, peakA, objectK - q * rc);
+        return PeakPoint.at(s, r, k, tamb, rh, peakA, setPointK - q * rc);
     }
 
     /**
@@ -629,13 +629,13 @@ public final class OperatingPointSolver {
         double s = module.seebeckVPerK();
         double r = module.resistanceOhm();
         double k = module.conductanceWPerK();
-        double objectK = c.objectK();
+        double setPointK = c.setPointK();
         double rc = c.coldInterfaceKPerW();
         double tamb = c.ambientK();
         double rh = c.hotPathKPerW();
-        double peakA = peakCurrentA(s, r, k, objectK, tamb, rh, Double.NaN);
-        double startW = Math.min(0.0, coldHeatW(s, r, k, objectK, tamb, rh, peakA));
-        return capacityAtObject(s, r, k, objectK, rc, tamb, rh, startW, peakA, objectK - startW * rc);
+        double peakA = peakCurrentA(s, r, k, setPointK, tamb, rh, Double.NaN);
+        double startW = Math.min(0.0, coldHeatW(s, r, k, setPointK, tamb, rh, peakA));
+        return capacityAtObject(s, r, k, setPointK, rc, tamb, rh, startW, peakA, setPointK - startW * rc);
     }
 
     /**
@@ -680,13 +680,13 @@ public final class OperatingPointSolver {
                     coldK, Units.celsiusFromKelvin(coldK), ambientK, rh, peakW, peakA));
         }
         double startW = Math.min(c.heatLoadW(), peakW);
-        PeakPoint atObject = capacityAtObject(s, r, k, c.objectK(), c.coldInterfaceKPerW(), ambientK, rh, startW,
-                peakA, c.objectK() - startW * c.coldInterfaceKPerW());
+        PeakPoint atObject = capacityAtObject(s, r, k, c.setPointK(), c.coldInterfaceKPerW(), ambientK, rh, startW,
+                peakA, c.setPointK() - startW * c.coldInterfaceKPerW());
         return new Infeasible(Reason.LOAD_ABOVE_CAPACITY, format(
                 "needs %.2f W of cooling at a cold face of %.2f K; with this heat sink the peak there is %.2f W"
                         + " at %.2f A, and at most %.2f W can be removed while holding the object at %.2f K (%.2f °C)",
-                c.heatLoadW(), coldK, peakW, peakA, atObject.heatW(), c.objectK(),
-                Units.celsiusFromKelvin(c.objectK())), atObject.heatW(), atObject.currentA());
+                c.heatLoadW(), coldK, peakW, peakA, atObject.heatW(), c.setPointK(),
+                Units.celsiusFromKelvin(c.setPointK())), atObject.heatW(), atObject.currentA());
     }
 
     /**
@@ -694,7 +694,7 @@ public final class OperatingPointSolver {
      * voltage) rather than solved for the load at the set-point; only then can the point be over-driven.
      */
     private static Solved complete(ModuleArray array, ModuleParameters module, CoolingCase c, DriveLimits limits,
-                                   double currentA, double voltageV, double coldK, double hotK, double objectK,
+                                   double currentA, double voltageV, double coldK, double hotK, double setPointK,
                                    boolean fixedDrive) {
         double s = module.seebeckVPerK();
         double r = module.resistanceOhm();
@@ -716,7 +716,7 @@ public final class OperatingPointSolver {
         List<Warning> warnings = warnings(module, limits, currentA, voltageV, coldK, hotK, ambientK, dewPointK,
                 frostPointK);
         if (fixedDrive) {
-            warnings = overDriveWarnings(warnings, currentA, slope, objectK, ambientK);
+            warnings = overDriveWarnings(warnings, currentA, slope, setPointK, ambientK);
         }
         double fractionOfImax = limits.hasRatedImax() ? currentA / limits.ratedImaxA() : Double.NaN;
         double copOptimalA = module.copOptimalCurrentA(coldK, hotK);
@@ -736,12 +736,12 @@ public final class OperatingPointSolver {
         double seedA = Math.max(0.0, currentA + towardPeakA);
         double limitA = limits.currentLimitA();
         double atLimitK = coldSideAtCurrentLimitK(s, r, k, ambientK, rh, loadW, limitA, coldK);
-        PeakPoint atObject = capacityAtObject(s, r, k, objectK, rc, ambientK, rh, loadW, seedA, coldK);
+        PeakPoint atObject = capacityAtObject(s, r, k, setPointK, rc, ambientK, rh, loadW, seedA, coldK);
         double lowestColdK = Double.isNaN(atLimitK)
                 ? lowestColdSideK(s, r, k, ambientK, rh, loadW, limitA, coldK, atObject)
                 : atLimitK;
-        double marginK = objectK - (lowestColdK + loadW * rc);
-        return new Solved(currentA, voltageV, powerW, cop, objectK, coldK, hotK, rejectedW, loadW, fractionOfImax,
+        double marginK = setPointK - (lowestColdK + loadW * rc);
+        return new Solved(currentA, voltageV, powerW, cop, setPointK, coldK, hotK, rejectedW, loadW, fractionOfImax,
                 atObject.heatW(), atObject.currentA(), marginK, copOptimalA, maxCop, dewPointK, frostPointK, warnings,
                 perModule);
     }
@@ -838,18 +838,18 @@ public final class OperatingPointSolver {
      * part warmer than the ambient.
      */
     private static List<Warning> overDriveWarnings(List<Warning> warnings, double currentA, double slopeWPerA,
-                                                   double objectK, double ambientK) {
+                                                   double setPointK, double ambientK) {
         List<Warning> list = warnings.isEmpty() ? null : new ArrayList<>(warnings);
         if (currentA > 0 && slopeWPerA < 0) {
             list = add(list, Warning.Code.OVER_DRIVEN, format(
                     "at %.2f A the module is past its capacity peak: each extra ampere pumps %.2f W less, so less"
                             + " current would hold the part colder and draw less power", currentA, -slopeWPerA));
         }
-        if (objectK > ambientK) {
-            list = add(list, Warning.Code.OBJECT_ABOVE_AMBIENT, format(
+        if (setPointK > ambientK) {
+            list = add(list, Warning.Code.COOLED_PART_ABOVE_AMBIENT, format(
                     "the cooled part settles at %.1f °C, %.1f K above the %.1f °C ambient: at this drive the cooler"
-                            + " does not bring it below ambient%s", Units.celsiusFromKelvin(objectK),
-                    objectK - ambientK, Units.celsiusFromKelvin(ambientK),
+                            + " does not bring it below ambient%s", Units.celsiusFromKelvin(setPointK),
+                    setPointK - ambientK, Units.celsiusFromKelvin(ambientK),
                     currentA > 0 && slopeWPerA < 0 ? " and its own heat warms it" : ""));
         }
         return list == null ? List.of() : list;

@@ -27,29 +27,29 @@ public record ParasiticLoad(double convectionCoefficientWPerM2K, double exposedA
     }
 
     /** Newton's law of cooling, h·A·(Tamb − Tobj), W (Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, ch. 1). */
-    public double convectionW(double objectK, double ambientK) {
-        return convectionCoefficientWPerM2K * exposedAreaM2 * (ambientK - objectK);
+    public double convectionW(double setPointK, double ambientK) {
+        return convectionCoefficientWPerM2K * exposedAreaM2 * (ambientK - setPointK);
     }
 
     /**
      * Radiation exchange of a small grey surface with large surroundings at ambient, ε·σ·A·(Tamb⁴ − Tobj⁴), W
      * (Incropera & DeWitt, ch. 1, small body in a large enclosure).
      */
-    public double radiationW(double objectK, double ambientK) {
-        Check.positive("objectK", objectK);
+    public double radiationW(double setPointK, double ambientK) {
+        Check.positive("setPointK", setPointK);
         Check.positive("ambientK", ambientK);
         double ambient2 = ambientK * ambientK;
-        double object2 = objectK * objectK;
+        double object2 = setPointK * setPointK;
         return emissivity * STEFAN_BOLTZMANN_W_PER_M2K4 * exposedAreaM2 * (ambient2 * ambient2 - object2 * object2);
     }
 
     /** Conduction through leads and supports, G·(Tamb − Tobj), W (Fourier's law in lumped form). */
-    public double conductionW(double objectK, double ambientK) {
-        return leadConductanceWPerK * (ambientK - objectK);
+    public double conductionW(double setPointK, double ambientK) {
+        return leadConductanceWPerK * (ambientK - setPointK);
     }
 
     /** The three together, W. */
-    public double totalW(double objectK, double ambientK) {
-        return convectionW(objectK, ambientK) + radiationW(objectK, ambientK) + conductionW(objectK, ambientK);
+    public double totalW(double setPointK, double ambientK) {
+        return convectionW(setPointK, ambientK) + radiationW(setPointK, ambientK) + conductionW(setPointK, ambientK);
     }
 }

@@ -10,16 +10,16 @@ import java.util.List;
  * @param voltageV              terminal voltage V = S(Th − Tc) + I·R, V
  * @param powerW                electrical input power, W
  * @param cop                   Qc/P; +∞ when no power is needed (passive case)
- * @param objectK               object temperature, K (the set-point, or the one reached at fixed drive)
+ * @param setPointK               object temperature, K (the set-point, or the one reached at fixed drive)
  * @param coldSideK             cold-face temperature, K
  * @param hotSideK              hot-face temperature, K
  * @param heatRejectedW         heat into the hot-side path Qh = Qc + P, W
  * @param heatLoadW             heat pumped from the object, W
  * @param fractionOfImax        current / rated Imax (0.5 = half); NaN when no rating was given
- * @param maxHeatLoadW          most heat the cooler can remove while holding the object at objectK with
+ * @param maxHeatLoadW          most heat the cooler can remove while holding the object at setPointK with
  *                              this heat sink (cold-interface drop included), W
  * @param currentAtMaxHeatLoadA current at that most heat, A
- * @param marginK               how much colder than objectK the object could be held at the same load with
+ * @param marginK               how much colder than setPointK the object could be held at the same load with
  *                              the current limited to min(capacity-peak current, rated Imax, supply current), K
  * @param copOptimalCurrentA    current of best COP at the solved junction temperatures, A (Ioffe 1957)
  * @param maxCop                best COP at the solved junction temperatures (Ioffe 1957)
@@ -28,7 +28,7 @@ import java.util.List;
  * @param warnings              risks, empty when none
  * @param perModule             what one module of the array carries
  */
-public record Solved(double currentA, double voltageV, double powerW, double cop, double objectK, double coldSideK,
+public record Solved(double currentA, double voltageV, double powerW, double cop, double setPointK, double coldSideK,
                      double hotSideK, double heatRejectedW, double heatLoadW, double fractionOfImax,
                      double maxHeatLoadW, double currentAtMaxHeatLoadA, double marginK, double copOptimalCurrentA,
                      double maxCop, double dewPointK, double frostPointK, List<Warning> warnings,

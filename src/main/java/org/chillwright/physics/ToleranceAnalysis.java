@@ -163,7 +163,7 @@ public final class ToleranceAnalysis {
                     : r.typicalAmbientK() + random.nextDouble() * (c.ambientK() - r.typicalAmbientK());
             double supply = factor(random, s.supplyFraction());
             ModuleArray array = s.partsVary() ? drawnArray(nominal, factors) : nominal;
-            CoolingCase drawnCase = new CoolingCase(c.objectK(), ambientK, c.heatLoadW(),
+            CoolingCase drawnCase = new CoolingCase(c.setPointK(), ambientK, c.heatLoadW(),
                     c.sinkResistanceKPerW() * sink, c.coldInterfaceKPerW() * cold, c.hotInterfaceKPerW() * hotFactor,
                     c.relativeHumidity());
             DriveLimits drawnLimits = supply == 1 ? limits : new DriveLimits(limits.ratedImaxA(),
@@ -250,14 +250,14 @@ public final class ToleranceAnalysis {
                 : Double.POSITIVE_INFINITY;
         double highA = Math.min(limits.currentLimitA(), Math.min(0.999 * runawayA, 2 * s * c.ambientK()
                 / e.resistanceOhm()));
-        UnivariateObjectiveFunction objectK = new UnivariateObjectiveFunction(i ->
-                solver.atCurrent(array, c, DriveLimits.NONE, i) instanceof Solved p ? p.objectK() : 1e9);
+        UnivariateObjectiveFunction setPointK = new UnivariateObjectiveFunction(i ->
+                solver.atCurrent(array, c, DriveLimits.NONE, i) instanceof Solved p ? p.setPointK() : 1e9);
         try {
             double lowest = new BrentOptimizer(SEARCH_ACCURACY, 1e-12) // per-call state
-                    .optimize(new MaxEval(SEARCH_EVALUATIONS), objectK, GoalType.MINIMIZE,
+                    .optimize(new MaxEval(SEARCH_EVALUATIONS), setPointK, GoalType.MINIMIZE,
                             new SearchInterval(0, highA, 0.5 * highA))
                     .getValue();
-            return lowest < 1e9 ? c.objectK() - lowest : Double.NaN;
+            return lowest < 1e9 ? c.setPointK() - lowest : Double.NaN;
         } catch (MathIllegalStateException e2) {
             return Double.NaN;
         }

@@ -29,7 +29,7 @@ public record Warning(Code code, String sentence) {
          */
         OVER_DRIVEN,
         /** Cooler at a fixed current or voltage: the cooled part settles warmer than the ambient. */
-        OBJECT_ABOVE_AMBIENT,
+        COOLED_PART_ABOVE_AMBIENT,
         /** Cold face below the ambient dew point + 2 K (dew point at or above 0 °C; 4 K when extrapolated). */
         CONDENSATION_RISK,
         /** Cold face below the ambient frost point + 2 K, when the dew point is below 0 °C (4 K when extrapolated). */

@@ -66,17 +66,17 @@ public final class WorstCaseCorners {
         double iface = 1 + k * spread.interfaceFraction();
         double supply = Math.max(0.01, 1 - k * spread.supplyFraction());
         CoolingCase hotHigh = c.withHeatLoadW(spec.highLoadW());
-        CoolingCase hotHighWorst = new CoolingCase(c.objectK(), c.ambientK(), spec.highLoadW(),
+        CoolingCase hotHighWorst = new CoolingCase(c.setPointK(), c.ambientK(), spec.highLoadW(),
                 c.sinkResistanceKPerW() * sink, c.coldInterfaceKPerW() * iface, c.hotInterfaceKPerW() * iface,
                 c.relativeHumidity());
         DriveLimits worstLimits = new DriveLimits(limits.ratedImaxA(), limits.supplyMaxV() * supply,
                 limits.supplyMaxA() * supply, limits.maxHotSideK());
-        CoolingCase coldLow = new CoolingCase(c.objectK(), spec.coldAmbientK(), spec.lowLoadW(),
+        CoolingCase coldLow = new CoolingCase(c.setPointK(), spec.coldAmbientK(), spec.lowLoadW(),
                 c.sinkResistanceKPerW(), c.coldInterfaceKPerW(), c.hotInterfaceKPerW(), c.relativeHumidity());
         OperatingPoint cold = solver.solve(array, coldLow, limits);
         HeatingCheck.Result heat = null;
-        if (spec.coldAmbientK() < c.objectK() && cold instanceof Solved p && p.currentA() == 0) {
-            heat = heating.check(array.equivalent(), c.objectK(), spec.coldAmbientK(), -spec.lowLoadW(),
+        if (spec.coldAmbientK() < c.setPointK() && cold instanceof Solved p && p.currentA() == 0) {
+            heat = heating.check(array.equivalent(), c.setPointK(), spec.coldAmbientK(), -spec.lowLoadW(),
                     c.coldInterfaceKPerW(), c.hotPathKPerW(), limits.currentLimitA());
         }
         return List.of(

@@ -51,7 +51,7 @@ public record RankingCase(CoolingCase coolingCase, double sinkRiseK, double supp
             return coolingCase;
         }
         var c = coolingCase;
-        return new CoolingCase(c.objectK(), c.ambientK() + sinkRiseK, c.heatLoadW(), 0, c.coldInterfaceKPerW(),
+        return new CoolingCase(c.setPointK(), c.ambientK() + sinkRiseK, c.heatLoadW(), 0, c.coldInterfaceKPerW(),
                 c.hotInterfaceKPerW(), c.relativeHumidity());
     }
 }

@@ -18,7 +18,7 @@ import org.chillwright.physics.Units;
 public final class RankingCsv {
 
     static final String[] HEADER = {"rank", "feasible", "moduleId", "supplier", "partNumber", "lifecycle",
-        "seriesCount", "parallelCount", "currentA", "voltageV", "powerW", "cop", "objectC", "coldSideC", "hotSideC",
+        "seriesCount", "parallelCount", "currentA", "voltageV", "powerW", "cop", "setPointC", "coldSideC", "hotSideC",
         "heatRejectedW", "fractionOfImax", "maxHeatLoadW", "marginK", "unitPrice", "arrayCost", "currency",
         "paretoFront", "requiredSinkKPerW", "warnings", "reason"};
 
@@ -34,7 +34,7 @@ public final class RankingCsv {
                 csv.printRecord(d.rank(), true, d.moduleId(), safe(row.supplier()), safe(row.partNumber()),
                         row.lifecycle(),
                         d.seriesCount(), d.parallelCount(), num(p.currentA()), num(p.voltageV()), num(p.powerW()),
-                        num(p.cop()), num(Units.celsiusFromKelvin(p.objectK())),
+                        num(p.cop()), num(Units.celsiusFromKelvin(p.setPointK())),
                         num(Units.celsiusFromKelvin(p.coldSideK())), num(Units.celsiusFromKelvin(p.hotSideK())),
                         num(p.heatRejectedW()), num(p.fractionOfImax()), num(p.maxHeatLoadW()), num(p.marginK()),
                         num(d.unitPrice()), num(d.arrayCost()), row.currency(), d.paretoFront(),

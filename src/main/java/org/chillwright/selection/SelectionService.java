@@ -155,7 +155,7 @@ public class SelectionService {
     }
 
     private static CoolingCase withSink(CoolingCase c, double sinkResistanceKPerW) {
-        return new CoolingCase(c.objectK(), c.ambientK(), c.heatLoadW(), sinkResistanceKPerW, c.coldInterfaceKPerW(),
+        return new CoolingCase(c.setPointK(), c.ambientK(), c.heatLoadW(), sinkResistanceKPerW, c.coldInterfaceKPerW(),
                 c.hotInterfaceKPerW(), c.relativeHumidity());
     }
 
@@ -168,7 +168,7 @@ public class SelectionService {
         double limitA = Math.min(Double.isFinite(ratedImaxA) ? ratedImaxA : Double.POSITIVE_INFINITY,
                 Double.isFinite(spec.rankingCase().supplyMaxA()) ? spec.rankingCase().supplyMaxA()
                         : Double.POSITIVE_INFINITY);
-        return heatingCheck.check(equivalent, c.objectK(), spec.coldest().ambientK(), spec.coldest().heatNeededW(),
+        return heatingCheck.check(equivalent, c.setPointK(), spec.coldest().ambientK(), spec.coldest().heatNeededW(),
                 c.coldInterfaceKPerW(), c.hotPathKPerW(), limitA);
     }
 

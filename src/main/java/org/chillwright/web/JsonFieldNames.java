@@ -3,14 +3,14 @@ package org.chillwright.web;
 import java.util.Map;
 
 /**
- * Physics names its parameters in SI with kelvin ({@code objectK}); the HTTP contract names the same
- * inputs at the edge units ({@code objectC}). This maps the first to the second so that an error found
+ * Physics names its parameters in SI with kelvin ({@code setPointK}); the HTTP contract names the same
+ * inputs at the edge units ({@code setPointC}). This maps the first to the second so that an error found
  * deep in a solver still names the field the client sent.
  */
 public final class JsonFieldNames {
 
     private static final Map<String, String> EDGE_NAMES = Map.ofEntries(
-            Map.entry("objectK", "objectC"),
+            Map.entry("setPointK", "setPointC"),
             Map.entry("ambientK", "ambientC"),
             Map.entry("hotSideK", "hotSideC"),
             Map.entry("coldSideK", "coldSideC"),

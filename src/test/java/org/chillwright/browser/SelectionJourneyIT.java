@@ -30,7 +30,7 @@ class SelectionJourneyIT extends BrowserJourney {
         driver.get(url("/cases/new"));
 
         // the check case S10 set-up, typed in: 10 W at 5 °C, 25 °C ambient, 0.3 K/W sink
-        type("objectTemperature", "5");
+        type("setPointTemperature", "5");
         type("ambientTemperature", "25");
         type("activeLoad", "10");
         type("sinkResistanceKPerW", "0.3");

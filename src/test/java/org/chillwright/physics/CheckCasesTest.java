@@ -169,7 +169,7 @@ class CheckCasesTest {
             if (point instanceof Solved s) {
                 out.put("Tc", s.coldSideK());
                 out.put("Th", s.hotSideK());
-                out.put("Tobj", s.objectK());
+                out.put("Tobj", s.setPointK());
                 out.put("V", s.voltageV());
                 out.put("P", s.powerW());
                 out.put("COP", s.cop());

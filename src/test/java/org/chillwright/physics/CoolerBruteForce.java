@@ -55,8 +55,8 @@ public final class CoolerBruteForce {
      */
     public static double[] capacityAtObject(ModuleParameters m, CoolingCase c) {
         double rc = c.coldInterfaceKPerW();
-        java.util.function.DoubleUnaryOperator surplus = q -> peakAtColdFace(m, c, c.objectK() - rc * q)[1] - q;
-        double low = Math.min(0, peakAtColdFace(m, c, c.objectK())[1]);
+        java.util.function.DoubleUnaryOperator surplus = q -> peakAtColdFace(m, c, c.setPointK() - rc * q)[1] - q;
+        double low = Math.min(0, peakAtColdFace(m, c, c.setPointK())[1]);
         double high = low + 1;
         while (surplus.applyAsDouble(high) > 0) {
             high = low + 2 * (high - low);
@@ -70,15 +70,15 @@ public final class CoolerBruteForce {
             }
         }
         double q = 0.5 * (low + high);
-        return new double[] {q, peakAtColdFace(m, c, c.objectK() - rc * q)[0]};
+        return new double[] {q, peakAtColdFace(m, c, c.setPointK() - rc * q)[0]};
     }
 
     /**
      * Object temperature at a fixed current with the case's load, K; NaN when the point is not physical
      * (runaway, or a cold face at or below 0 K). Solves the two raw balances in (Tc, Th).
      */
-    public static double objectAtCurrentK(ModuleParameters m, CoolingCase c, double i) {
-        double tc = c.objectK();
+    public static double partAtCurrentK(ModuleParameters m, CoolingCase c, double i) {
+        double tc = c.setPointK();
         double th = c.ambientK();
         double[] r = balances(m, c, i, tc, th);
         double[] rTc = balances(m, c, i, tc + 1, th);
@@ -102,11 +102,11 @@ public final class CoolerBruteForce {
     }
 
     /** The lowest object temperature at the case's load over currents 0 to {@code limitA}, K. */
-    public static double lowestObjectK(ModuleParameters m, CoolingCase c, double limitA) {
-        double top = Double.isFinite(limitA) ? limitA : 2 * m.seebeckVPerK() * c.objectK() / m.resistanceOhm();
+    public static double lowestSetPointK(ModuleParameters m, CoolingCase c, double limitA) {
+        double top = Double.isFinite(limitA) ? limitA : 2 * m.seebeckVPerK() * c.setPointK() / m.resistanceOhm();
         double[] best = scanMax(i -> {
-            double objectK = objectAtCurrentK(m, c, i);
-            return Double.isNaN(objectK) ? Double.NEGATIVE_INFINITY : -objectK;
+            double setPointK = partAtCurrentK(m, c, i);
+            return Double.isNaN(setPointK) ? Double.NEGATIVE_INFINITY : -setPointK;
         }, 0, top);
         return -best[1];
     }

@@ -36,14 +36,14 @@ class DetailedModelProperties {
 
     @Property(tries = 60)
     void theCoolingSolveAlwaysAnswersAndItsPointsObeyTheNetwork(
-            @ForAll @DoubleRange(min = 250, max = 310) double objectK,
+            @ForAll @DoubleRange(min = 250, max = 310) double setPointK,
             @ForAll @DoubleRange(min = 280, max = 320) double ambientK,
             @ForAll @DoubleRange(min = 0, max = 25) double loadW,
             @ForAll @DoubleRange(min = 0, max = 1.5) double sinkKPerW,
             @ForAll @DoubleRange(min = 0, max = 0.3) double interfaceKPerW,
             @ForAll @DoubleRange(min = 0.5, max = 2.5) double lengthMm) {
         var array = DetailedArray.single(module(lengthMm, 1e-10, 1e-6));
-        var c = new CoolingCase(objectK, ambientK, loadW, sinkKPerW, interfaceKPerW, interfaceKPerW);
+        var c = new CoolingCase(setPointK, ambientK, loadW, sinkKPerW, interfaceKPerW, interfaceKPerW);
         assertThatCode(() -> new DetailedSolver().solve(array, c, DriveLimits.NONE)).doesNotThrowAnyException();
         // passive points (I = 0) report heat rejected = load, as the lumped solve does
         if (new DetailedSolver().solve(array, c, DriveLimits.NONE) instanceof DetailedPoint p && p.currentA() > 0) {
@@ -56,7 +56,7 @@ class DetailedModelProperties {
 
     @Property(tries = 15)
     void theCoolingSolveFindsTheFirstCurrentABruteForceScanFinds(
-            @ForAll @DoubleRange(min = 270, max = 295) double objectK,
+            @ForAll @DoubleRange(min = 270, max = 295) double setPointK,
             @ForAll @DoubleRange(min = 1, max = 12) double loadW,
             @ForAll @DoubleRange(min = 0.05, max = 0.8) double sinkKPerW) {
         // Brute force written here: step the current up from 0 in small steps, close the hot balance
@@ -65,7 +65,7 @@ class DetailedModelProperties {
         var module = module(1.2, 0, 0);
         var array = DetailedArray.single(module);
         double ambientK = 300;
-        var c = new CoolingCase(objectK, ambientK, loadW, sinkKPerW, 0.05, 0.05);
+        var c = new CoolingCase(setPointK, ambientK, loadW, sinkKPerW, 0.05, 0.05);
         var solver = new DetailedSolver();
         double tc = c.coldSideAtLoadK();
         double stepA = 0.005;

@@ -28,11 +28,11 @@ class EnergyBalanceProperties {
     void solvedPointsCloseTheHotSideBalance(@ForAll @Scale(6) @DoubleRange(min = 0.01, max = 0.1) double s,
                                             @ForAll @Scale(6) @DoubleRange(min = 0.5, max = 5) double r,
                                             @ForAll @Scale(6) @DoubleRange(min = 0.1, max = 1) double k,
-                                            @ForAll @Scale(6) @DoubleRange(min = 260, max = 300) double objectK,
+                                            @ForAll @Scale(6) @DoubleRange(min = 260, max = 300) double setPointK,
                                             @ForAll @Scale(6) @DoubleRange(min = 0, max = 20) double loadW,
                                             @ForAll @Scale(6) @DoubleRange(min = 0, max = 1) double sinkKPerW) {
         // Source: thermal network Th = Tamb + Qh·Rh with Qh = Qc + P, the heat-sink network, derived from the ideal equations.
-        var c = new CoolingCase(objectK, 298.15, loadW, sinkKPerW, 0.05, 0.05);
+        var c = new CoolingCase(setPointK, 298.15, loadW, sinkKPerW, 0.05, 0.05);
         if (new OperatingPointSolver().solve(new ModuleParameters(s, r, k), c, DriveLimits.NONE) instanceof Solved p
                 && p.currentA() > 0) {
             assertThat(p.hotSideK()).isCloseTo(298.15 + c.hotPathKPerW() * p.heatRejectedW(), within(1e-6));

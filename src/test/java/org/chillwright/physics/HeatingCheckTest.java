@@ -42,7 +42,7 @@ class HeatingCheckTest {
     }
 
     @Test
-    void noHeatingNeededWhileTheIdleModuleDrainsLessThanTheObjectDissipates() {
+    void noHeatingNeededWhileTheIdleModuleDrainsLessThanTheCooledPartDissipates() {
         // 2 W dissipated; at 5 K below the set-point the idle module conducts about 1.1 W away (K·ΔT across it)
         var result = check.check(TM_A, 293.15, 288.15, -2, 0.1, 0.3, 3.8);
         assertThat(result.needsHeating()).isFalse();
@@ -51,7 +51,7 @@ class HeatingCheckTest {
     }
 
     @Test
-    void heatingIsNeededWhenTheIdleModuleDrainsMoreThanTheObjectDissipates() {
+    void heatingIsNeededWhenTheIdleModuleDrainsMoreThanTheCooledPartDissipates() {
         // same 2 W, 25 K below the set-point: conduction through K = 0.25 W/K drains about 5 W
         var result = check.check(TM_A, 293.15, 268.15, -2, 0.1, 0.3, 3.8);
         assertThat(result.needsHeating()).isTrue();

@@ -55,8 +55,8 @@ class IndependentCoolerChecksTest {
         // marginK = set-point − the lowest object temperature at this load over currents up to the limit, each
         // object temperature from the raw fixed-current balances
         Solved point = (Solved) solver.solve(TM_A, S10, limits);
-        double lowestK = CoolerBruteForce.lowestObjectK(TM_A, S10, limits.currentLimitA());
-        assertThat(point.marginK()).isCloseTo(S10.objectK() - lowestK, within(1e-6));
+        double lowestK = CoolerBruteForce.lowestSetPointK(TM_A, S10, limits.currentLimitA());
+        assertThat(point.marginK()).isCloseTo(S10.setPointK() - lowestK, within(1e-6));
     }
 
     static Stream<Arguments> cascades() {

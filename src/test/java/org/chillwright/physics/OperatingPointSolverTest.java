@@ -119,12 +119,12 @@ class OperatingPointSolverTest {
 
     @ParameterizedTest
     @MethodSource("overDrivenCurrents")
-    void capacityAndMarginDependOnlyOnTheObjectTemperatureAndLoad(double currentA) {
+    void capacityAndMarginDependOnlyOnTheSetPointAndLoad(double currentA) {
         // At a fixed current beyond the peak (3.8 A) the capacity search starts on the falling side of
         // Qc(I); the answers must still be those of the same object temperature and load.
         var c = new CoolingCase(278.15, 298.15, 10, 0.3, 0.1, 0.05);
         Solved driven = solved(solver.atCurrent(ModuleArray.single(TM_A), c, DriveLimits.NONE, currentA));
-        Solved designed = solved(solver.solve(TM_A, objectAt(driven.objectK()), DriveLimits.NONE));
+        Solved designed = solved(solver.solve(TM_A, setPointAt(driven.setPointK()), DriveLimits.NONE));
         assertThat(driven.maxHeatLoadW()).isCloseTo(designed.maxHeatLoadW(), within(1e-9));
         assertThat(driven.marginK()).isCloseTo(designed.marginK(), within(1e-9));
     }
@@ -147,17 +147,17 @@ class OperatingPointSolverTest {
 
     @ParameterizedTest
     @MethodSource("currentLimits")
-    void marginKIsTheLowestObjectTemperatureWithinTheCurrentLimit(DriveLimits limits) {
-        // Self-consistency: at objectK - marginK the load is just reachable within the current limit, not below it.
+    void marginKIsTheLowestSetPointWithinTheCurrentLimit(DriveLimits limits) {
+        // Self-consistency: at setPointK - marginK the load is just reachable within the current limit, not below it.
         Solved point = solved(solver.solve(TM_A, S10, limits));
-        double lowestK = S10.objectK() - point.marginK();
+        double lowestK = S10.setPointK() - point.marginK();
         assertThat(point.marginK()).isPositive();
-        assertThat(solver.solve(TM_A, objectAt(lowestK + 1e-4), limits).feasible()).isTrue();
-        assertThat(solver.solve(TM_A, objectAt(lowestK - 1e-4), limits).feasible()).isFalse();
+        assertThat(solver.solve(TM_A, setPointAt(lowestK + 1e-4), limits).feasible()).isTrue();
+        assertThat(solver.solve(TM_A, setPointAt(lowestK - 1e-4), limits).feasible()).isFalse();
     }
 
-    private static CoolingCase objectAt(double objectK) {
-        return new CoolingCase(objectK, 298.15, 10, 0.3, 0.1, 0.05);
+    private static CoolingCase setPointAt(double setPointK) {
+        return new CoolingCase(setPointK, 298.15, 10, 0.3, 0.1, 0.05);
     }
 
     @Test
@@ -296,7 +296,7 @@ class OperatingPointSolverTest {
      * load plus the electrical power, Th = Tamb + Rh·(Q + I·(S(Th − Tc) + I·R)) (ideal equations, A.F. Ioffe,
      * Semiconductor Thermoelements and Thermoelectric Cooling, 1957, from memory; first law). Linear in (Tc, Th).
      */
-    private static double objectAtCurrentK(ModuleParameters m, CoolingCase c, double i) {
+    private static double partAtCurrentK(ModuleParameters m, CoolingCase c, double i) {
         double s = m.seebeckVPerK();
         double r = m.resistanceOhm();
         double k = m.conductanceWPerK();
@@ -318,21 +318,21 @@ class OperatingPointSolverTest {
         // The set-up of check case S10 driven at 8 A, beyond its 3.8 A capacity peak: the object settles at
         // 311.64 K (the raw balances above), 13.5 K above the 298.15 K ambient; the warnings list was empty.
         Solved point = solved(solver.atCurrent(ModuleArray.single(TM_A), S10, DriveLimits.NONE, 8));
-        assertThat(point.objectK()).isCloseTo(objectAtCurrentK(TM_A, S10, 8), within(1e-9))
+        assertThat(point.setPointK()).isCloseTo(partAtCurrentK(TM_A, S10, 8), within(1e-9))
                 .isCloseTo(311.64, within(0.005));
         // more current warms it: the sign of dQc/dI < 0, seen on the raw balances
-        assertThat(objectAtCurrentK(TM_A, S10, 8.01)).isGreaterThan(objectAtCurrentK(TM_A, S10, 8));
+        assertThat(partAtCurrentK(TM_A, S10, 8.01)).isGreaterThan(partAtCurrentK(TM_A, S10, 8));
         assertThat(point.warnings()).extracting(Warning::code)
-                .contains(Warning.Code.OVER_DRIVEN, Warning.Code.OBJECT_ABOVE_AMBIENT);
+                .contains(Warning.Code.OVER_DRIVEN, Warning.Code.COOLED_PART_ABOVE_AMBIENT);
     }
 
     @Test
     void aCurrentBelowThePeakIsNotOverDriven() {
         // at 2 A the S10 set-up still cools as current rises (raw balances) and stays below ambient
         Solved point = solved(solver.atCurrent(ModuleArray.single(TM_A), S10, DriveLimits.NONE, 2));
-        assertThat(objectAtCurrentK(TM_A, S10, 2.01)).isLessThan(objectAtCurrentK(TM_A, S10, 2));
+        assertThat(partAtCurrentK(TM_A, S10, 2.01)).isLessThan(partAtCurrentK(TM_A, S10, 2));
         assertThat(point.warnings()).extracting(Warning::code)
-                .doesNotContain(Warning.Code.OVER_DRIVEN, Warning.Code.OBJECT_ABOVE_AMBIENT);
+                .doesNotContain(Warning.Code.OVER_DRIVEN, Warning.Code.COOLED_PART_ABOVE_AMBIENT);
     }
 
     @Test
@@ -415,7 +415,7 @@ class OperatingPointSolverTest {
         Solved atCurrent = solved(solver.atCurrent(single, c, DriveLimits.NONE, 2.5));
         Solved atVoltage = solved(solver.atVoltage(single, c, DriveLimits.NONE, atCurrent.voltageV()));
         assertThat(atVoltage.currentA()).isCloseTo(2.5, within(1e-8));
-        assertThat(atVoltage.objectK()).isCloseTo(atCurrent.objectK(), within(1e-6));
+        assertThat(atVoltage.setPointK()).isCloseTo(atCurrent.setPointK(), within(1e-6));
     }
 
     @Test

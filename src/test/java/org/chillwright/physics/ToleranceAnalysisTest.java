@@ -84,7 +84,7 @@ class ToleranceAnalysisTest {
         double[] v = x.clone();
         v[index] += delta;
         var module = new ModuleParameters(v[0], v[1], v[2]);
-        var c = new CoolingCase(S10.objectK(), S10.ambientK(), S10.heatLoadW(), v[3], v[4], v[5]);
+        var c = new CoolingCase(S10.setPointK(), S10.ambientK(), S10.heatLoadW(), v[3], v[4], v[5]);
         return ((Solved) new OperatingPointSolver().solve(module, c, LIMITS)).marginK();
     }
 

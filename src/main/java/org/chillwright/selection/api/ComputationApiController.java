@@ -54,23 +54,23 @@ class ComputationApiController {
 
     @PostMapping("/operating-point")
     @Operation(summary = "Solve one module or array against one cooling case",
-            description = "Without currentA or voltageV: the current that removes heatLoadW at objectC (lower root). "
+            description = "Without currentA or voltageV: the current that removes heatLoadW at setPointC (lower root). "
                     + "With one of them: the object temperature reached at that drive.")
     OperatingPointResponse operatingPoint(@Valid @RequestBody OperatingPointRequest request) {
         if (request.currentA() != null && request.voltageV() != null) {
             throw new InvalidRequestException("voltageV", "give currentA or voltageV, not both");
         }
         boolean fixedDrive = request.currentA() != null || request.voltageV() != null;
-        if (!fixedDrive && request.objectC() == null) {
-            throw new InvalidRequestException("objectC", "is required unless currentA or voltageV is given");
+        if (!fixedDrive && request.setPointC() == null) {
+            throw new InvalidRequestException("setPointC", "is required unless currentA or voltageV is given");
         }
         int series = request.seriesCount() == null ? 1 : request.seriesCount();
         int parallel = request.parallelCount() == null ? 1 : request.parallelCount();
         var module = modules.resolve(request.module(), "module");
         var array = new ModuleArray(module.parameters(), series, parallel);
-        double objectK = Units.kelvinFromCelsius(fixedDrive && request.objectC() == null
-                ? request.ambientC() : request.objectC());
-        var coolingCase = new CoolingCase(objectK, Units.kelvinFromCelsius(request.ambientC()),
+        double setPointK = Units.kelvinFromCelsius(fixedDrive && request.setPointC() == null
+                ? request.ambientC() : request.setPointC());
+        var coolingCase = new CoolingCase(setPointK, Units.kelvinFromCelsius(request.ambientC()),
                 request.heatLoadW(), request.sinkResistanceKPerW(), orZero(request.coldInterfaceKPerW()),
                 orZero(request.hotInterfaceKPerW()), request.relativeHumidityPct() == null ? Double.NaN
                         : Units.fractionFromPercent(request.relativeHumidityPct()));

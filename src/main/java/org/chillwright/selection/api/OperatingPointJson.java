@@ -30,7 +30,7 @@ final class OperatingPointJson {
         var share = s.perModule();
         return new OperatingPointResponse(true, null,
                 s.currentA(), s.voltageV(), s.powerW(), number(s.cop()),
-                celsius(s.objectK()), celsius(s.coldSideK()), celsius(s.hotSideK()),
+                celsius(s.setPointK()), celsius(s.coldSideK()), celsius(s.hotSideK()),
                 s.heatLoadW(), s.heatRejectedW(), number(s.fractionOfImax()),
                 number(s.maxHeatLoadW()), number(s.currentAtMaxHeatLoadA()), number(s.loadMarginPct()),
                 number(s.marginK()), number(s.copOptimalCurrentA()), number(s.maxCop()),

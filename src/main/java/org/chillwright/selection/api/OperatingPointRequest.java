@@ -12,14 +12,14 @@ import org.chillwright.catalog.ModuleInput;
 
 /**
  * {@code POST /api/v1/operating-point}: one module or array against one cooling case. Without
- * {@code currentA} or {@code voltageV} the load is solved at {@code objectC}; with one of them the
+ * {@code currentA} or {@code voltageV} the load is solved at {@code setPointC}; with one of them the
  * object temperature reached at that drive is reported.
  */
 public record OperatingPointRequest(
         @NotNull @Valid ModuleInput module,
         @Min(1) @Max(64) Integer seriesCount,
         @Min(1) @Max(64) Integer parallelCount,
-        @DecimalMin(value = "-273.15", inclusive = false) @DecimalMax("400") Double objectC,
+        @DecimalMin(value = "-273.15", inclusive = false) @DecimalMax("400") Double setPointC,
         @NotNull @DecimalMin(value = "-273.15", inclusive = false) @DecimalMax("400") Double ambientC,
         @NotNull @PositiveOrZero Double heatLoadW,
         @NotNull @PositiveOrZero Double sinkResistanceKPerW,

@@ -13,7 +13,7 @@ public record OperatingPointResponse(
         Double voltageV,
         Double powerW,
         Double cop,
-        Double objectC,
+        Double setPointC,
         Double coldSideC,
         Double hotSideC,
         Double heatLoadW,

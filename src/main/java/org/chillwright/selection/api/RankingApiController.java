@@ -69,7 +69,7 @@ class RankingApiController {
         if (request.sinkResistanceKPerW() != null && request.sinkRiseK() != null) {
             throw new InvalidRequestException("sinkRiseK", "give sinkResistanceKPerW or sinkRiseK, not both");
         }
-        var coolingCase = new CoolingCase(Units.kelvinFromCelsius(request.objectC()),
+        var coolingCase = new CoolingCase(Units.kelvinFromCelsius(request.setPointC()),
                 Units.kelvinFromCelsius(request.ambientC()), request.heatLoadW(), orZero(request.sinkResistanceKPerW()),
                 orZero(request.coldInterfaceKPerW()), orZero(request.hotInterfaceKPerW()),
                 request.relativeHumidityPct() == null ? Double.NaN
@@ -84,8 +84,8 @@ class RankingApiController {
                 ? EnumSet.complementOf(EnumSet.of(Lifecycle.OBSOLETE)) : request.lifecycles();
         CaseSpec.ColdestDay coldest = null;
         if (request.coldestAmbientC() != null) {
-            if (request.coldestAmbientC() >= request.objectC()) {
-                throw new InvalidRequestException("coldestAmbientC", "must be below objectC (" + request.objectC()
+            if (request.coldestAmbientC() >= request.setPointC()) {
+                throw new InvalidRequestException("coldestAmbientC", "must be below setPointC (" + request.setPointC()
                         + " °C) for a heating check, was " + request.coldestAmbientC() + " °C");
             }
             double loadW = request.heatLoadAtColdestW() == null ? request.heatLoadW() : request.heatLoadAtColdestW();

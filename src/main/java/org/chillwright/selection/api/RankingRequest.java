@@ -20,7 +20,7 @@ import org.chillwright.selection.Objective;
  * {@code heatLoadAtColdestW} (default {@code heatLoadW}; negative when the object loses heat).
  */
 public record RankingRequest(
-        @NotNull @DecimalMin(value = "-273.15", inclusive = false) @DecimalMax("400") Double objectC,
+        @NotNull @DecimalMin(value = "-273.15", inclusive = false) @DecimalMax("400") Double setPointC,
         @NotNull @DecimalMin(value = "-273.15", inclusive = false) @DecimalMax("400") Double ambientC,
         @NotNull @PositiveOrZero Double heatLoadW,
         @DecimalMin(value = "-273.15", inclusive = false) @DecimalMax("400") Double coldestAmbientC,

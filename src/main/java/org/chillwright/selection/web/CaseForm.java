@@ -29,7 +29,7 @@ import org.springframework.web.util.UriComponentsBuilder;
 public record CaseForm(
         TemperatureUnit temperatureUnit,
         PowerUnit powerUnit,
-        @NotNull(message = "enter the temperature the object must be held at") Double objectTemperature,
+        @NotNull(message = "enter the temperature the object must be held at") Double setPointTemperature,
         @NotNull(message = "enter the hottest ambient the design must survive") Double ambientTemperature,
         Double coldestAmbientTemperature,
         @NotNull(message = "enter the heat the object dissipates (0 if none)") @PositiveOrZero Double activeLoad,
@@ -83,8 +83,8 @@ public record CaseForm(
     }
 
     @AssertTrue(message = "the object must be above absolute zero")
-    public boolean isObjectTemperatureAboveAbsoluteZero() {
-        return objectTemperature == null || temperatureUnit().toCelsius(objectTemperature) > -273.15;
+    public boolean isSetPointAboveAbsoluteZero() {
+        return setPointTemperature == null || temperatureUnit().toCelsius(setPointTemperature) > -273.15;
     }
 
     @AssertTrue(message = "the ambient must be above absolute zero")
@@ -94,13 +94,13 @@ public record CaseForm(
 
     @AssertTrue(message = "the coldest ambient must be above absolute zero and below the set-point")
     public boolean isColdestAmbientTemperatureSensible() {
-        return coldestAmbientTemperature == null || objectTemperature == null
+        return coldestAmbientTemperature == null || setPointTemperature == null
                 || (temperatureUnit().toCelsius(coldestAmbientTemperature) > -273.15
-                && coldestAmbientTemperature < objectTemperature);
+                && coldestAmbientTemperature < setPointTemperature);
     }
 
-    public double objectC() {
-        return temperatureUnit().toCelsius(objectTemperature);
+    public double setPointC() {
+        return temperatureUnit().toCelsius(setPointTemperature);
     }
 
     public double ambientC() {
@@ -115,7 +115,7 @@ public record CaseForm(
 
     /** Parasitic heat leaking into the object from the ambient, W (0 when no helper values are given). */
     public double parasiticW() {
-        return leaks().totalW(Units.kelvinFromCelsius(objectC()), Units.kelvinFromCelsius(ambientC()));
+        return leaks().totalW(Units.kelvinFromCelsius(setPointC()), Units.kelvinFromCelsius(ambientC()));
     }
 
     public double activeLoadW() {
@@ -136,12 +136,12 @@ public record CaseForm(
             return null;
         }
         double coldK = Units.kelvinFromCelsius(temperatureUnit().toCelsius(coldestAmbientTemperature));
-        double netInW = activeLoadW() + leaks().totalW(Units.kelvinFromCelsius(objectC()), coldK);
+        double netInW = activeLoadW() + leaks().totalW(Units.kelvinFromCelsius(setPointC()), coldK);
         return new CaseSpec.ColdestDay(coldK, -netInW);
     }
 
     public CaseSpec toSpec() {
-        var coolingCase = new CoolingCase(Units.kelvinFromCelsius(objectC()), Units.kelvinFromCelsius(ambientC()),
+        var coolingCase = new CoolingCase(Units.kelvinFromCelsius(setPointC()), Units.kelvinFromCelsius(ambientC()),
                 heatLoadW(), sizesSink() ? 0 : sinkResistanceKPerW, orZero(coldInterfaceKPerW),
                 orZero(hotInterfaceKPerW),
                 relativeHumidityPct == null ? Double.NaN : Units.fractionFromPercent(relativeHumidityPct));
@@ -158,7 +158,7 @@ public record CaseForm(
         var uri = UriComponentsBuilder.newInstance();
         add(uri, "temperatureUnit", temperatureUnit());
         add(uri, "powerUnit", powerUnit());
-        add(uri, "objectTemperature", objectTemperature);
+        add(uri, "setPointTemperature", setPointTemperature);
         add(uri, "ambientTemperature", ambientTemperature);
         add(uri, "coldestAmbientTemperature", coldestAmbientTemperature);
         add(uri, "activeLoad", activeLoad);

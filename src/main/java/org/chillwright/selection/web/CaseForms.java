@@ -26,7 +26,7 @@ final class CaseForms {
         return new CaseForm(
                 v.containsKey("temperatureUnit") ? TemperatureUnit.valueOf(v.get("temperatureUnit")) : null,
                 v.containsKey("powerUnit") ? PowerUnit.valueOf(v.get("powerUnit")) : null,
-                d(v, "objectTemperature"), d(v, "ambientTemperature"), d(v, "coldestAmbientTemperature"),
+                d(v, "setPointTemperature"), d(v, "ambientTemperature"), d(v, "coldestAmbientTemperature"),
                 d(v, "activeLoad"), d(v, "convectionWPerM2K"),
                 d(v, "exposedAreaCm2"), d(v, "emissivity"), d(v, "leadConductanceMWPerK"),
                 v.containsKey("sizeSink") ? Boolean.valueOf(v.get("sizeSink")) : null,

@@ -40,7 +40,7 @@ public record CaseView(CaseForm form) {
     public java.util.Map<String, String> lines() {
         var c = form.toSpec().rankingCase();
         var lines = new java.util.LinkedHashMap<String, String>();
-        lines.put("Object set-point", temperature(c.coolingCase().objectK()));
+        lines.put("Object set-point", temperature(c.coolingCase().setPointK()));
         lines.put("Hottest ambient", temperature(c.coolingCase().ambientK()));
         if (form.coldestDay() != null) {
             lines.put("Coldest ambient (heating check)", temperature(form.coldestDay().ambientK()));

@@ -30,7 +30,7 @@ class ComputationApiControllerTest {
 
     /** Synthetic module TM-A of the check cases: S = 0.04 V/K, R = 2.4 Ω, K = 0.25 W/K. */
     private static final String TM_A = "{\"seebeckVPerK\":0.04,\"resistanceOhm\":2.4,\"conductanceWPerK\":0.25}";
-    private static final String S10_CASE = "\"objectC\":5,\"ambientC\":25,\"heatLoadW\":%s,\"sinkResistanceKPerW\":0.3,"
+    private static final String S10_CASE = "\"setPointC\":5,\"ambientC\":25,\"heatLoadW\":%s,\"sinkResistanceKPerW\":0.3,"
             + "\"hotInterfaceKPerW\":0.05,\"coldInterfaceKPerW\":0.1";
 
     @Autowired
@@ -75,12 +75,12 @@ class ComputationApiControllerTest {
     }
 
     @Test
-    void fixedCurrentReportsTheObjectTemperatureOfCheckCaseS12() throws Exception {
+    void fixedCurrentReportsTheTemperatureReachedInCheckCaseS12() throws Exception {
         // check case S12: I = 2.5 A, 8 W, hot-side path 0.35 K/W, cold interface 0.1 K/W → Tobj 264.8909091 K
         post("/api/v1/operating-point", "{\"module\":" + TM_A + ",\"ambientC\":25,\"heatLoadW\":8,"
                 + "\"sinkResistanceKPerW\":0.3,\"hotInterfaceKPerW\":0.05,\"coldInterfaceKPerW\":0.1,\"currentA\":2.5}")
                 .andExpect(status().isOk())
-                .andExpect(jsonPath("$.objectC").value(closeTo(264.8909091 - 273.15, 1e-6), Double.class))
+                .andExpect(jsonPath("$.setPointC").value(closeTo(264.8909091 - 273.15, 1e-6), Double.class))
                 .andExpect(jsonPath("$.hotSideC").value(closeTo(307.7272727 - 273.15, 1e-6), Double.class))
                 .andExpect(jsonPath("$.cop").value(closeTo(0.4131455399, 1e-8), Double.class));
     }
@@ -189,19 +189,19 @@ class ComputationApiControllerTest {
 
     @ParameterizedTest(name = "{0}")
     @CsvSource(delimiter = '|', value = {
-        "missing object temperature | {\"module\":" + TM_A + ",\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3} | objectC",
-        "object below absolute zero | {\"module\":" + TM_A + ",\"objectC\":-300,\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3} | objectC",
-        "negative sink resistance   | {\"module\":" + TM_A + ",\"objectC\":5,\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":-0.3} | sinkResistanceKPerW",
-        "negative module resistance | {\"module\":{\"seebeckVPerK\":0.04,\"resistanceOhm\":-2.4,\"conductanceWPerK\":0.25},\"objectC\":5,\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3} | module.resistanceOhm",
-        "NaN load                   | {\"module\":" + TM_A + ",\"objectC\":5,\"ambientC\":25,\"heatLoadW\":\"NaN\",\"sinkResistanceKPerW\":0.3} | heatLoadW",
-        "text for a number          | {\"module\":" + TM_A + ",\"objectC\":\"cold\",\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3} | objectC",
-        "missing module             | {\"objectC\":5,\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3} | module",
-        "two module shapes at once  | {\"module\":{\"imaxA\":3,\"seebeckVPerK\":0.04},\"objectC\":5,\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3} | module",
-        "incomplete ratings         | {\"module\":{\"imaxA\":3,\"vmaxV\":12,\"hotSideC\":25},\"objectC\":5,\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3} | module.dtmaxK",
-        "ΔTmax above hot side in K  | {\"module\":{\"imaxA\":3,\"vmaxV\":12,\"dtmaxK\":400,\"hotSideC\":25},\"objectC\":5,\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3} | module.dtmaxK",
+        "missing object temperature | {\"module\":" + TM_A + ",\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3} | setPointC",
+        "object below absolute zero | {\"module\":" + TM_A + ",\"setPointC\":-300,\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3} | setPointC",
+        "negative sink resistance   | {\"module\":" + TM_A + ",\"setPointC\":5,\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":-0.3} | sinkResistanceKPerW",
+        "negative module resistance | {\"module\":{\"seebeckVPerK\":0.04,\"resistanceOhm\":-2.4,\"conductanceWPerK\":0.25},\"setPointC\":5,\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3} | module.resistanceOhm",
+        "NaN load                   | {\"module\":" + TM_A + ",\"setPointC\":5,\"ambientC\":25,\"heatLoadW\":\"NaN\",\"sinkResistanceKPerW\":0.3} | heatLoadW",
+        "text for a number          | {\"module\":" + TM_A + ",\"setPointC\":\"cold\",\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3} | setPointC",
+        "missing module             | {\"setPointC\":5,\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3} | module",
+        "two module shapes at once  | {\"module\":{\"imaxA\":3,\"seebeckVPerK\":0.04},\"setPointC\":5,\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3} | module",
+        "incomplete ratings         | {\"module\":{\"imaxA\":3,\"vmaxV\":12,\"hotSideC\":25},\"setPointC\":5,\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3} | module.dtmaxK",
+        "ΔTmax above hot side in K  | {\"module\":{\"imaxA\":3,\"vmaxV\":12,\"dtmaxK\":400,\"hotSideC\":25},\"setPointC\":5,\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3} | module.dtmaxK",
         "current and voltage both   | {\"module\":" + TM_A + ",\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3,\"currentA\":1,\"voltageV\":3} | voltageV",
-        "humidity above 100 %       | {\"module\":" + TM_A + ",\"objectC\":5,\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3,\"relativeHumidityPct\":140} | relativeHumidityPct",
-        "unknown ratings method     | {\"module\":{\"imaxA\":3,\"vmaxV\":12,\"dtmaxK\":68,\"hotSideC\":25,\"method\":\"GUESS\"},\"objectC\":5,\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3} | module.method",
+        "humidity above 100 %       | {\"module\":" + TM_A + ",\"setPointC\":5,\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3,\"relativeHumidityPct\":140} | relativeHumidityPct",
+        "unknown ratings method     | {\"module\":{\"imaxA\":3,\"vmaxV\":12,\"dtmaxK\":68,\"hotSideC\":25,\"method\":\"GUESS\"},\"setPointC\":5,\"ambientC\":25,\"heatLoadW\":5,\"sinkResistanceKPerW\":0.3} | module.method",
     })
     void badOperatingPointRequestIsA400NamingTheField(String what, String json, String field) throws Exception {
         post("/api/v1/operating-point", json)

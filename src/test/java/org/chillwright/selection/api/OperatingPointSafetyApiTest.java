@@ -41,7 +41,7 @@ class OperatingPointSafetyApiTest {
         // 8 A on the S10 set-up: the part settles at 38.5 °C, above the 25 °C ambient (see
         // OperatingPointSolverTest for the value from the raw balances)
         assertThat(operatingPoint(",\"sinkResistanceKPerW\":0.3,\"currentA\":8")).hasStatusOk().bodyJson()
-                .extractingPath("$.warnings[*].code").asArray().contains("OVER_DRIVEN", "OBJECT_ABOVE_AMBIENT");
+                .extractingPath("$.warnings[*].code").asArray().contains("OVER_DRIVEN", "COOLED_PART_ABOVE_AMBIENT");
     }
 
     @Test
@@ -83,7 +83,7 @@ class OperatingPointSafetyApiTest {
     void theOperatingPointWarnsOfFrostWithTheFrostPoint() {
         // cold face held at −8 °C (no cold interface) in 25 °C air at 10 %: below the −7.77 °C frost point
         var result = mvc.post().uri("/api/v1/operating-point").contentType(MediaType.APPLICATION_JSON)
-                .content("{\"module\":" + TM_A + ",\"objectC\":-8,\"ambientC\":25,\"heatLoadW\":1,"
+                .content("{\"module\":" + TM_A + ",\"setPointC\":-8,\"ambientC\":25,\"heatLoadW\":1,"
                         + "\"sinkResistanceKPerW\":0.1,\"relativeHumidityPct\":10}")
                 .exchange();
         assertThat(result).hasStatusOk().bodyJson().extractingPath("$.warnings[*].code").asArray()
@@ -97,7 +97,7 @@ class OperatingPointSafetyApiTest {
         // eight small modules in series on the S10 set-up at 11 W: 63.3 V (see OperatingPointSolverTest)
         var result = mvc.post().uri("/api/v1/operating-point").contentType(MediaType.APPLICATION_JSON)
                 .content("{\"module\":{\"seebeckVPerK\":0.04,\"resistanceOhm\":24,\"conductanceWPerK\":0.025},"
-                        + "\"seriesCount\":8,\"objectC\":5,\"ambientC\":25,\"heatLoadW\":11,"
+                        + "\"seriesCount\":8,\"setPointC\":5,\"ambientC\":25,\"heatLoadW\":11,"
                         + "\"sinkResistanceKPerW\":0.3,\"coldInterfaceKPerW\":0.1,\"hotInterfaceKPerW\":0.05}")
                 .exchange();
         assertThat(result).hasStatusOk().bodyJson().extractingPath("$.warnings[*].code").asArray()
@@ -110,7 +110,7 @@ class OperatingPointSafetyApiTest {
         // at 5 °C is 14.52 W (the brute-force scan in OperatingPointSolverTest agrees with the solver to 1e-6 W;
         // S11's 14.1 W is the peak at the colder face that 25 W through the interface would need)
         var result = mvc.post().uri("/api/v1/operating-point").contentType(MediaType.APPLICATION_JSON)
-                .content("{\"module\":" + TM_A + ",\"objectC\":5,\"ambientC\":25,\"heatLoadW\":25,"
+                .content("{\"module\":" + TM_A + ",\"setPointC\":5,\"ambientC\":25,\"heatLoadW\":25,"
                         + "\"sinkResistanceKPerW\":0.3,\"coldInterfaceKPerW\":0.1,\"hotInterfaceKPerW\":0.05}")
                 .exchange();
         assertThat(result).hasStatusOk().bodyJson().extractingPath("$.feasible").isEqualTo(false);
@@ -124,7 +124,7 @@ class OperatingPointSafetyApiTest {
     void aRefusedModuleInARankingCarriesTheCapacityOfTheDesignNamed() {
         TestCatalog.ensure(catalog);
         var result = mvc.post().uri("/api/v1/rankings").contentType(MediaType.APPLICATION_JSON)
-                .content("{\"objectC\":5,\"ambientC\":25,\"heatLoadW\":10,\"sinkResistanceKPerW\":0.3,"
+                .content("{\"setPointC\":5,\"ambientC\":25,\"heatLoadW\":10,\"sinkResistanceKPerW\":0.3,"
                         + "\"coldInterfaceKPerW\":0.1,\"hotInterfaceKPerW\":0.05,\"maxModules\":1,\"supplier\":\""
                         + TestCatalog.SUPPLIER_B + "\"}")
                 .exchange();

@@ -29,7 +29,7 @@ import org.springframework.test.web.servlet.ResultActions;
 class RankingApiControllerTest {
 
     /** check case S10: 10 W at 5 °C, 25 °C ambient, sink 0.3 K/W, interfaces 0.1 (cold) / 0.05 (hot) K/W. */
-    private static final String S10 = "\"objectC\":5,\"ambientC\":25,\"heatLoadW\":10,\"sinkResistanceKPerW\":0.3,"
+    private static final String S10 = "\"setPointC\":5,\"ambientC\":25,\"heatLoadW\":10,\"sinkResistanceKPerW\":0.3,"
             + "\"coldInterfaceKPerW\":0.1,\"hotInterfaceKPerW\":0.05";
 
     @Autowired
@@ -88,7 +88,7 @@ class RankingApiControllerTest {
 
     @Test
     void sizingModeReportsTheSinkNeeded() throws Exception {
-        rank("{\"objectC\":5,\"ambientC\":25,\"heatLoadW\":10,\"sinkRiseK\":8,\"maxModules\":1}")
+        rank("{\"setPointC\":5,\"ambientC\":25,\"heatLoadW\":10,\"sinkRiseK\":8,\"maxModules\":1}")
                 .andExpect(status().isOk())
                 .andExpect(jsonPath("$.candidates[0].requiredSinkKPerW").isNumber());
     }
@@ -105,7 +105,7 @@ class RankingApiControllerTest {
         lists.transition(list.id(), approved.id(), EntryState.APPROVED, "pilot build passed", null, null, approver);
         lists.propose(list.id(), one, "still proposed, must not take part", engineer);
 
-        rank("{\"objectC\":5,\"ambientC\":25,\"heatLoadW\":4,\"sinkResistanceKPerW\":0.3,\"listId\":" + list.id() + "}")
+        rank("{\"setPointC\":5,\"ambientC\":25,\"heatLoadW\":4,\"sinkResistanceKPerW\":0.3,\"listId\":" + list.id() + "}")
                 .andExpect(status().isOk())
                 .andExpect(jsonPath("$.candidates[*].partNumber").value(org.hamcrest.Matchers.everyItem(
                         org.hamcrest.Matchers.is("TMA-HALF"))))
@@ -129,12 +129,12 @@ class RankingApiControllerTest {
 
     @ParameterizedTest(name = "{0}")
     @CsvSource(delimiter = '|', value = {
-        "no heat sink at all      | {\"objectC\":5,\"ambientC\":25,\"heatLoadW\":10} | sinkResistanceKPerW",
-        "sink given twice         | {\"objectC\":5,\"ambientC\":25,\"heatLoadW\":10,\"sinkResistanceKPerW\":0.3,\"sinkRiseK\":5} | sinkRiseK",
+        "no heat sink at all      | {\"setPointC\":5,\"ambientC\":25,\"heatLoadW\":10} | sinkResistanceKPerW",
+        "sink given twice         | {\"setPointC\":5,\"ambientC\":25,\"heatLoadW\":10,\"sinkResistanceKPerW\":0.3,\"sinkRiseK\":5} | sinkRiseK",
         "too many modules         | {" + S10 + ",\"maxModules\":9} | maxModules",
         "unknown objective        | {" + S10 + ",\"objective\":\"FASTEST\"} | objective",
         "Imax fraction above one  | {" + S10 + ",\"maxFractionOfImax\":1.5} | maxFractionOfImax",
-        "missing load             | {\"objectC\":5,\"ambientC\":25,\"sinkResistanceKPerW\":0.3} | heatLoadW",
+        "missing load             | {\"setPointC\":5,\"ambientC\":25,\"sinkResistanceKPerW\":0.3} | heatLoadW",
         "coldest day too warm     | {" + S10 + ",\"coldestAmbientC\":10} | coldestAmbientC",
         "cold load without a day  | {" + S10 + ",\"heatLoadAtColdestW\":2} | coldestAmbientC",
     })

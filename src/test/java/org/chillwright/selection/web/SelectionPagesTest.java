@@ -43,7 +43,7 @@ class SelectionPagesTest {
         var fields = new java.util.LinkedHashMap<String, String>();
         fields.put("temperatureUnit", "C");
         fields.put("powerUnit", "W");
-        fields.put("objectTemperature", "5");
+        fields.put("setPointTemperature", "5");
         fields.put("ambientTemperature", "25");
         fields.put("activeLoad", "10");
         fields.put("sinkResistanceKPerW", "0.3");
@@ -63,7 +63,7 @@ class SelectionPagesTest {
     @Test
     void newCasePageOffersAnExampleCase() throws Exception {
         mvc.perform(get("/cases/new")).andExpect(status().isOk())
-                .andExpect(content().string(allOf(containsString("name=\"objectTemperature\""),
+                .andExpect(content().string(allOf(containsString("name=\"setPointTemperature\""),
                         containsString("value=\"25\""), containsString("Rank the catalog"))));
     }
 
@@ -87,7 +87,7 @@ class SelectionPagesTest {
         // 41 °F = 5 °C and 77 °F = 25 °C by the °F definition (NIST SP 811, 2008)
         String celsius = mvc.perform(s10("/cases/rank.csv")).andReturn().getResponse().getContentAsString();
         String fahrenheit = mvc.perform(s10("/cases/rank.csv", "temperatureUnit", "F",
-                        "objectTemperature", "41", "ambientTemperature", "77"))
+                        "setPointTemperature", "41", "ambientTemperature", "77"))
                 .andReturn().getResponse().getContentAsString();
         assertThat(fahrenheit).isEqualTo(celsius);
     }

@@ -42,7 +42,7 @@ class ShockHazardShownTest {
         var fields = new LinkedHashMap<String, String>();
         fields.put("temperatureUnit", "C");
         fields.put("powerUnit", "W");
-        fields.put("objectTemperature", "5");
+        fields.put("setPointTemperature", "5");
         fields.put("ambientTemperature", "25");
         fields.put("activeLoad", "11");
         fields.put("sinkResistanceKPerW", "0.3");
@@ -63,7 +63,7 @@ class ShockHazardShownTest {
     @Test
     void theRankingApiFlagsTheEightInSeriesString() {
         var result = mvc.post().uri("/api/v1/rankings").contentType(MediaType.APPLICATION_JSON)
-                .content("{\"objectC\":5,\"ambientC\":25,\"heatLoadW\":11,\"sinkResistanceKPerW\":0.3,"
+                .content("{\"setPointC\":5,\"ambientC\":25,\"heatLoadW\":11,\"sinkResistanceKPerW\":0.3,"
                         + "\"coldInterfaceKPerW\":0.1,\"hotInterfaceKPerW\":0.05,\"maxModules\":8,\"supplier\":\""
                         + TestCatalog.SUPPLIER_B + "\"}")
                 .exchange();

@@ -47,7 +47,7 @@ class StudyPagesTest {
     }
 
     private static MockHttpServletRequestBuilder withCase(MockHttpServletRequestBuilder request, String lifecycle) {
-        return request.param("temperatureUnit", "C").param("objectTemperature", "5").param("ambientTemperature", "25")
+        return request.param("temperatureUnit", "C").param("setPointTemperature", "5").param("ambientTemperature", "25")
                 .param("activeLoad", "10").param("sinkResistanceKPerW", "0.3").param("coldInterfaceKPerW", "0.1")
                 .param("hotInterfaceKPerW", "0.05").param("maxModules", "1").param("supplier", SUPPLIER)
                 .param("lifecycles", lifecycle);
