@@ -72,6 +72,35 @@ class PowerConditioningTest {
                 .isCloseTo(point.voltageV(), within(1e-9));
     }
 
+    @ParameterizedTest(name = "RL = {0} ohm")
+    @CsvSource({"0.3", "2.4", "7", "60"})
+    void theClosedFormPointAgreesWithTheGeneratorSolverFieldByField(double loadOhm) {
+        var solved = solver.atLoad(TM_A, WITH_EXCHANGERS, loadOhm);
+        var closed = PowerConditioning.pointAt(TM_A, WITH_EXCHANGERS, solved.currentA());
+        assertThat(closed.loadOhm()).isCloseTo(loadOhm, within(1e-9));
+        assertThat(closed.voltageV()).isCloseTo(solved.voltageV(), within(1e-9));
+        assertThat(closed.powerW()).isCloseTo(solved.powerW(), within(1e-9));
+        assertThat(closed.hotJunctionK()).isCloseTo(solved.hotJunctionK(), within(1e-9));
+        assertThat(closed.coldJunctionK()).isCloseTo(solved.coldJunctionK(), within(1e-9));
+        assertThat(closed.heatInW()).isCloseTo(solved.heatInW(), within(1e-9));
+        assertThat(closed.efficiency()).isCloseTo(solved.efficiency(), within(1e-12));
+    }
+
+    @Test
+    void aFixedFractionStaysOnThePhysicalBranchWhereTheColdExchangerWouldRunAway() {
+        // Found by PowerConditioningProperties: here S·I·Rc exceeds 1 + Rc·K below S·ΔT/R, so currents beyond
+        // I_det have no steady junction temperatures; the bracket ends inside I_det.
+        var module = new ModuleParameters(0.0272, 0.05, 0.02);
+        var c = new GeneratorCase(329.65, 300, 2.58, 5);
+        assertThat(PowerConditioning.physicalCurrentLimitA(module, c)).isLessThan(0.0272 * 29.65 / 0.05);
+        var p = conditioning.atFractionOfOpenCircuit(module, c, 0.05);
+        assertThat(p.voltageV()).isCloseTo(0.05 * solver.openCircuitV(module, c), within(1e-12));
+        assertThat(p.coldJunctionK()).isBetween(300.0, p.hotJunctionK());
+        assertThat(p.hotJunctionK()).isLessThanOrEqualTo(329.65);
+        assertThat(p.hotJunctionK()).isCloseTo(329.65 - 2.58 * p.heatInW(), within(1e-9));
+        assertThat(p.coldJunctionK()).isCloseTo(300 + 5 * p.heatOutW(), within(1e-9));
+    }
+
     @Test
     void halfTheOpenCircuitVoltageWithExchangersGivesLessThanTracking() {
         // With finite exchangers the best load is no longer at Voc/2 (physics.md i), so tracking gets more.
