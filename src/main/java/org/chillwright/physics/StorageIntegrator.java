@@ -23,7 +23,9 @@ import org.apache.commons.math3.exception.MathIllegalStateException;
  * <p><b>Thresholds.</b> Full, the device's turn-on level, its cut-off (the floor) and empty are found inside a
  * step by a bracketing Brent root in time, on the side past the threshold, and the state changes there.
  * Full holds the storage and turns the surplus away; empty holds it at zero with the leakage limited to what
- * comes in.
+ * comes in. The sliver by which a crossing passes full or empty (the energy of at most
+ * {@value #TIME_ACCURACY_S} s) is booked as turned away or as not leaked, so the storage never leaves
+ * [0, full] and the books still balance.
  *
  * <p><b>Device.</b> Off at the start unless the storage already holds one event above the floor; it turns on
  * when the storage reaches that level (a supervisor's power-good threshold; common practice, no source), fires
@@ -167,7 +169,7 @@ final class StorageIntegrator {
             storedJ = step[0];
             timeS = !crossed && h == remainingS ? stopS : timeS + h;
             if (crossed) {
-                reached(threshold);
+                reached(threshold, f);
                 return;
             }
         }
@@ -196,15 +198,40 @@ final class StorageIntegrator {
         };
     }
 
-    private void reached(Threshold threshold) {
+    private void reached(Threshold threshold, StorageFlows f) {
+        if (storedJ < 0) {
+            notDrawn(f);
+        }
         switch (threshold) {
-            case FULL -> full = true;
+            case FULL -> {
+                full = true;
+                // the crossing lands up to a nanosecond past full: that sliver was turned away, not stored
+                double overJ = storedJ - fullJ;
+                double efficiency = f.chargeEfficiency();
+                rejectedJ += overJ / efficiency;
+                chargeLossJ -= overJ / efficiency - overJ;
+                storedJ = fullJ;
+            }
             case TURN_ON -> turnOn();
             case FLOOR -> brownOut();
             case EMPTY -> {
                 // the next pass holds the storage at zero
             }
         }
+    }
+
+    /**
+     * A crossing of empty (or of a floor at zero) lands up to a nanosecond below zero: that sliver was never
+     * drawn; it comes off the draws in proportion to their rates at zero.
+     */
+    private void notDrawn(StorageFlows f) {
+        double deficitJ = -storedJ;
+        double sleepW = f.sleepAtW(0);
+        double leakW = f.leakAtW(0);
+        double sleepShare = sleepW + leakW > 0 ? sleepW / (sleepW + leakW) : 0;
+        sleepJ -= deficitJ * sleepShare;
+        leakageJ -= deficitJ * (1 - sleepShare);
+        storedJ = 0;
     }
 
     private void turnOn() {

@@ -97,11 +97,12 @@ public final class StorageSimulation {
         EnergyStorage storage = system.storage();
         double initialJ = storage.storedAtJ(request.initialStateOfCharge());
         double eventJ = system.device().eventEnergyJ();
-        if ((initialJ + deliverableJ) / eventJ > MAX_EVENTS) {
-            // each turn-on pays an event, so this bounds the turn-ons (and the work) of a chattering device
+        if (deliverableJ / eventJ + 1 > MAX_EVENTS) {
+            // every turn-on after the first follows a recharge of one event from the floor, paid by the harvest:
+            // this bounds the turn-ons (and the work) of a device that chatters at its threshold
             throw new InvalidQuantityException("eventEnergyJ", eventJ, String.format(java.util.Locale.ROOT,
                     "eventEnergyJ must be at least %.6g J: the harvest could pay for more than %d events of %s J",
-                    (initialJ + deliverableJ) / MAX_EVENTS, MAX_EVENTS, eventJ));
+                    deliverableJ / (MAX_EVENTS - 1), MAX_EVENTS, eventJ));
         }
 
         var off = new OffIntervals(request.timeStepS());
