@@ -18,9 +18,9 @@ package org.chillwright.physics;
  */
 public record Converter(String name, double coldStartV, ConverterEfficiencyTable efficiency, InputStrategy input) {
 
-    /** Low end of the typical cold-start voltage of converters for thermoelectric sources, V (common practice, no source). */
+    /** Low end of the typical cold-start voltage of converters for thermoelectric sources, V (common practice). */
     public static final double TYPICAL_COLD_START_LOW_V = 0.02;
-    /** High end of the typical cold-start voltage of converters for thermoelectric sources, V (common practice, no source). */
+    /** High end of the typical cold-start voltage of converters for thermoelectric sources, V (common practice). */
     public static final double TYPICAL_COLD_START_HIGH_V = 0.1;
 
     public Converter {

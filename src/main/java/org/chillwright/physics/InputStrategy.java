@@ -10,9 +10,10 @@ package org.chillwright.physics;
  *       converters for thermoelectric sources commonly sample about half (common practice, no source).</li>
  * </ul>
  */
-public sealed interface InputStrategy permits InputStrategy.MaximumPowerPoint, InputStrategy.FractionOfOpenCircuit {
+public sealed interface InputStrategy
+        permits InputStrategy.MaximumPowerPoint, InputStrategy.FractionOfOpenCircuit {
 
-    /** The fraction of the open-circuit voltage fixed-fraction converters commonly hold (common practice, no source). */
+    /** The fraction of the open-circuit voltage fixed-fraction converters commonly hold (common practice). */
     double COMMON_FRACTION_OF_OPEN_CIRCUIT = 0.5;
 
     /** Maximum-power-point tracking. */

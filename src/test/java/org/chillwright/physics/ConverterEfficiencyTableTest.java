@@ -74,14 +74,16 @@ class ConverterEfficiencyTableTest {
         var table = new ConverterEfficiencyTable(new double[] {1}, new double[] {1}, rows);
         rows[0][0] = 0.9;
         assertThat(table.at(1, 1)).isEqualTo(0.5);
-        assertThat(table).isEqualTo(new ConverterEfficiencyTable(new double[] {1}, new double[] {1}, new double[][] {{0.5}}));
+        assertThat(table).isEqualTo(
+                new ConverterEfficiencyTable(new double[] {1}, new double[] {1}, new double[][] {{0.5}}));
     }
 
     @Test
     void theDemoConverterIsAValidTableWithAColdStartInTheTypicalRange() {
         // Typical range: common practice (no source), see Converter.
         var demo = Converter.demo();
-        assertThat(demo.coldStartV()).isBetween(Converter.TYPICAL_COLD_START_LOW_V, Converter.TYPICAL_COLD_START_HIGH_V);
+        assertThat(demo.coldStartV())
+                .isBetween(Converter.TYPICAL_COLD_START_LOW_V, Converter.TYPICAL_COLD_START_HIGH_V);
         assertThat(demo.efficiency().at(1.0, 1e-2)).isGreaterThan(demo.efficiency().at(0.02, 1e-6));
     }
 }

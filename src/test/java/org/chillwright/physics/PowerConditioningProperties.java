@@ -16,7 +16,8 @@ import net.jqwik.api.constraints.Scale;
 class PowerConditioningProperties {
 
     private final PowerConditioning conditioning = new PowerConditioning();
-    private final GeneratorSolver solver = new GeneratorSolver(); // open circuit only: I = 0 is always on its valid branch
+    /** Used for the open circuit only: I = 0 is always on the valid branch. */
+    private final GeneratorSolver solver = new GeneratorSolver();
 
     @Property(tries = 300)
     void aFixedFractionHoldsItsVoltageAndNeverBeatsTracking(

@@ -135,7 +135,7 @@ class StorageSimulationProperties {
         if (a.runs()) {
             assertThat(a.timeToFirstEventS()).isPresent();
             assertThat(a.timeFromEmptyS().getAsDouble())
-                    .isGreaterThanOrEqualTo(a.timeToFirstEventS().getAsDouble() * (1 - 1e-12)); // equal when the floor is 0
+                    .isGreaterThanOrEqualTo(a.timeToFirstEventS().getAsDouble() * (1 - 1e-12)); // equal at floor 0
         }
     }
 }
