@@ -20,7 +20,7 @@ public record SimulationResult(List<SimulationSample> samples, List<OffInterval>
         offIntervals = List.copyOf(offIntervals);
     }
 
-    /** Total time with the device off, s. */
+    /** Total time with the device off, s (merged brown-outs count whole, with their short on-times). */
     public double offS() {
         return offIntervals.stream().mapToDouble(OffInterval::durationS).sum();
     }
