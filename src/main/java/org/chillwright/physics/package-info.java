@@ -1,2 +1,2 @@
-/** Thermoelectric module physics in SI units with kelvin: lumped parameters, ratings, operating points, arrays, cascades, generators, transients and dew point; the detailed temperature-dependent leg model with material sets and the ratings fit; tolerance analysis and worst-case corners. */
+/** Thermoelectric module physics in SI units with kelvin: lumped parameters, ratings, operating points, arrays, cascades, generators, transients and dew point; the detailed temperature-dependent leg model with material sets and the ratings fit; tolerance analysis and worst-case corners; generators through a converter into a storage and a duty-cycled device, step by step over a temperature schedule, with invented scenarios. */
 package org.chillwright.physics;
