@@ -6,7 +6,7 @@ package org.chillwright.physics;
  * @param reason what rules the point out
  * @param detail a plain-English sentence with the numbers, e.g. "needs 25.00 W of cooling …"
  */
-public record Infeasible(Reason reason, String detail) implements OperatingPoint, CascadePoint {
+public record Infeasible(Reason reason, String detail) implements OperatingPoint, CascadePoint, StackPoint {
 
     @Override
     public boolean feasible() {

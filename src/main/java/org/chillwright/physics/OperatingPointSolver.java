@@ -93,10 +93,7 @@ public final class OperatingPointSolver {
         double loadW = coolingCase.heatLoadW();
         double coldK = coolingCase.coldSideAtLoadK();
         if (!(coldK > 0)) {
-            return new Infeasible(Reason.DELTA_T_BEYOND_REACH, format(
-                    "holding the object at %.2f K with %.2f W through %.3f K/W would need the cold face at %.2f K,"
-                            + " at or below absolute zero",
-                    coolingCase.objectK(), loadW, coolingCase.coldInterfaceKPerW(), coldK));
+            return coldFaceAtAbsoluteZero(coolingCase);
         }
         double currentA = currentForLoadA(s, r, k, coldK, ambientK, rh, loadW);
         if (Double.isNaN(currentA)) {
@@ -109,6 +106,14 @@ public final class OperatingPointSolver {
             return overLimit;
         }
         return complete(array, module, coolingCase, limits, currentA, voltageV, coldK, hotK, coolingCase.objectK());
+    }
+
+    /** The case's cold interface would need a cold face at or below 0 K (the first no-solution condition). */
+    static Infeasible coldFaceAtAbsoluteZero(CoolingCase c) {
+        return new Infeasible(Reason.DELTA_T_BEYOND_REACH, format(
+                "holding the object at %.2f K with %.2f W through %.3f K/W would need the cold face at %.2f K,"
+                        + " at or below absolute zero",
+                c.objectK(), c.heatLoadW(), c.coldInterfaceKPerW(), c.coldSideAtLoadK()));
     }
 
     /**
@@ -593,7 +598,8 @@ public final class OperatingPointSolver {
         return new double[] {(b1 * a22 - a12 * b2) / det, (a11 * b2 - a21 * b1) / det};
     }
 
-    private static Infeasible limitViolation(DriveLimits limits, double currentA, double voltageV) {
+    /** The first limit a terminal current and voltage break, or null (physics.md e.5). */
+    static Infeasible limitViolation(DriveLimits limits, double currentA, double voltageV) {
         if (limits.hasRatedImax() && currentA > limits.ratedImaxA()) {
             return new Infeasible(Reason.CURRENT_ABOVE_IMAX,
                     format("needs %.2f A, above the rated Imax of %.2f A", currentA, limits.ratedImaxA()));
@@ -676,7 +682,8 @@ public final class OperatingPointSolver {
                 atObject.heatW(), atObject.currentA(), marginK, copOptimalA, maxCop, dewPointK, warnings, perModule);
     }
 
-    private static double dewPointK(CoolingCase c) {
+    /** Dew point of the case's ambient air, K; NaN when the humidity is unknown or the air is outside the fit. */
+    static double dewPointK(CoolingCase c) {
         if (!c.hasRelativeHumidity()) {
             return Double.NaN;
         }
@@ -687,7 +694,8 @@ public final class OperatingPointSolver {
         return DEW_POINT.dewPointK(c.ambientK(), c.relativeHumidity());
     }
 
-    private static List<Warning> warnings(ModuleParameters module, DriveLimits limits, double currentA, double coldK,
+    /** The risks at a solved point (thresholds common practice, see the constants); empty when none. */
+    static List<Warning> warnings(ModuleParameters module, DriveLimits limits, double currentA, double coldK,
                                           double hotK, double dewPointK) {
         List<Warning> warnings = null;
         if (limits.hasRatedImax() && currentA > NEAR_IMAX_FRACTION * limits.ratedImaxA()) {
