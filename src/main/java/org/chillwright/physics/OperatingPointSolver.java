@@ -214,6 +214,29 @@ public final class OperatingPointSolver {
     }
 
     /**
+     * Most heat removable while holding the case's set-point with its heat sink and cold interface, W, with no
+     * current limit: {@link Solved#maxHeatLoadW()} without solving the operating point first; 0 when not even
+     * zero load can be held there.
+     *
+     * @param module      module (or array equivalent) parameters
+     * @param coolingCase the case; its load is not used
+     */
+    static double maxHeatLoadW(ModuleParameters module, CoolingCase coolingCase) {
+        double s = module.seebeckVPerK();
+        double r = module.resistanceOhm();
+        double k = module.conductanceWPerK();
+        double objectK = coolingCase.objectK();
+        double ambientK = coolingCase.ambientK();
+        double rh = coolingCase.hotPathKPerW();
+        double peakA = peakCurrentA(s, r, k, objectK, ambientK, rh, Double.NaN);
+        if (coldHeatW(s, r, k, objectK, ambientK, rh, peakA) < 0) {
+            return 0.0;
+        }
+        return capacityAtObject(s, r, k, objectK, coolingCase.coldInterfaceKPerW(), ambientK, rh, 0, peakA, objectK)
+                .heatW();
+    }
+
+    /**
      * Lower-root current, A, that pumps {@code heatLoadW} from a cold face at {@code coldSideK} into a
      * hot path of {@code hotPathKPerW} to ambient; 0 in the passive case; NaN when no current does
      * (load above the capacity peak, ΔT beyond reach, or a cold face at or below 0 K). Allocation-free,

@@ -1,7 +1,7 @@
 package org.chillwright.physics;
 
 /**
- * A risk at a feasible operating point. All thresholds are common practice (no source), see
+ * A risk at a feasible operating point or of its drive. All thresholds are common practice (no source), see
  * physics.md sections k and l.
  *
  * @param code     machine-readable kind
@@ -18,6 +18,12 @@ public record Warning(Code code, String sentence) {
         /** Hot face above the module's maximum temperature. */
         HOT_SIDE_ABOVE_LIMIT,
         /** Cold face below the ambient dew point + 2 K. */
-        CONDENSATION_RISK
+        CONDENSATION_RISK,
+        /** The drive's ripple or pulses cost more than 10 % of the capacity or the COP of a steady current. */
+        DRIVE_LOSS,
+        /** Unfiltered PWM below the tens of kHz usually used. */
+        SLOW_PWM,
+        /** The drive's peak current is above the rated Imax. */
+        PEAK_ABOVE_IMAX
     }
 }
