@@ -24,7 +24,9 @@ public record CooldownRun(double currentA, double finalPartK, double finalHotSid
         /** One node (the part; the heat sink follows at once): an exact exponential, physics.md j. */
         CLOSED_FORM,
         /** Two nodes (the part and the heat sink): Commons Math's Dormand–Prince 8(5,3) integrator. */
-        DORMAND_PRINCE_853
+        DORMAND_PRINCE_853,
+        /** Two nodes with a sink node far faster than the part (stiff): the exact exponential of the 2x2 system. */
+        EXACT_TWO_NODE
     }
 
     public CooldownRun {

@@ -3,8 +3,10 @@ package org.chillwright.physics;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.MathIllegalArgumentException;
 import org.apache.commons.math3.exception.MathIllegalStateException;
+import org.apache.commons.math3.exception.MaxCountExceededException;
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
 import org.apache.commons.math3.ode.events.EventHandler;
 import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
@@ -33,8 +35,10 @@ import org.apache.commons.math3.ode.sampling.StepNormalizerMode;
  * {@link DormandPrince853Integrator} (an adaptive explicit Runge–Kutta pair of order 8: E. Hairer, S.P. Nørsett
  * &amp; G. Wanner, Solving Ordinary Differential Equations I, 2nd ed. 1993, sec. II.10, from memory) with an event
  * for the first time the part reaches the set-point band; the time constant is the slowest eigenvalue's.
- * The integrator rather than the eigen-decomposition, so that a current that changes with time or
- * temperature-dependent parameters can be added without a new method.</li>
+ * The integrator rather than the matrix exponential, so that a current that changes with time or
+ * temperature-dependent parameters can be added without a new method. A sink node far faster than the part
+ * (stiff: more than {@value #STIFFNESS_LIMIT} times, or more than {@value #MAX_EVALUATIONS} evaluations) would
+ * hold an explicit integrator to tiny steps; there the exact exponential of the linear 2x2 system is used.</li>
  * </ul>
  */
 public final class CooldownSolver {
@@ -51,6 +55,17 @@ public final class CooldownSolver {
     static final double RELATIVE_TOLERANCE = 1e-11;
     /** The set-point event is located to this fraction of the slowest time constant. */
     static final double EVENT_ACCURACY_TIME_CONSTANTS = 1e-10;
+    /**
+     * Above this ratio of the fastest to the slowest decay rate an explicit integrator's steps are held to the fast
+     * mode (its stability region) for the whole slow cool-down; the exact solution is used instead.
+     */
+    static final double STIFFNESS_LIMIT = 1e3;
+    /** Right-hand-side evaluations allowed to the integrator before the exact solution takes over. */
+    static final int MAX_EVALUATIONS = 200_000;
+    /** Scan points for the set-point crossing of the exact solution, over the search horizon. */
+    static final int CROSSING_SCAN_POINTS = 4000;
+    /** Evaluation cap of the Brent searches for the crossing. */
+    static final int MAX_BRENT_EVALUATIONS = 200;
 
     private final OperatingPointSolver solver = new OperatingPointSolver();
 
@@ -100,7 +115,7 @@ public final class CooldownSolver {
             return new CooldownRun(currentA, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, List.of(),
                     network.twoNodes ? CooldownRun.Method.DORMAND_PRINCE_853 : CooldownRun.Method.CLOSED_FORM);
         }
-        return network.twoNodes ? network.integrated(curveEndS) : network.closedForm(curveEndS);
+        return network.twoNodes ? network.twoNodes(curveEndS) : network.closedForm(curveEndS);
     }
 
     private static void require(ModuleArray array, CoolingCase coolingCase, CooldownSetup setup) {
@@ -111,7 +126,7 @@ public final class CooldownSolver {
     }
 
     /** The linear network at one current: the face temperatures and heats as affine functions of the nodes. */
-    private static final class Network {
+    static final class Network {
         final ModuleParameters module;
         final double i;
         final double rc;
@@ -224,18 +239,41 @@ public final class CooldownSolver {
             return finish(finalK, tamb, tauS, reachS, curve, CooldownRun.Method.CLOSED_FORM);
         }
 
-        CooldownRun integrated(double curveEndS) {
+        /** The two-node cool-down: integrated, or exact when the sink node is too fast for an explicit integrator. */
+        CooldownRun twoNodes(double curveEndS) {
             double[] a = partRate();
             double[] b = sinkRate();
-            // steady state: a + A·x = 0 by Cramer's rule
+            double trace = a[1] + b[2];
             double det = a[1] * b[2] - a[2] * b[1];
-            double finalK = (-a[0] * b[2] + a[2] * b[0]) / det;
-            double finalSinkK = (-a[1] * b[0] + b[1] * a[0]) / det;
-            // eigenvalues of [[a1, a2], [b1, b2]]: both decay (steady()); the slowest sets the time constant
+            double discriminant = trace * trace - 4 * det;
+            double slowest = discriminant >= 0 ? 0.5 * (trace + Math.sqrt(discriminant)) : 0.5 * trace;
+            double fastest = discriminant >= 0 ? 0.5 * (trace - Math.sqrt(discriminant)) : 0.5 * trace;
+            if (fastest / slowest <= STIFFNESS_LIMIT) {
+                CooldownRun run = integrated(curveEndS);
+                if (run != null) {
+                    return run;
+                }
+            }
+            return exact(curveEndS);
+        }
+
+        /** {steady part, steady sink base, slowest time constant}: a + A·x = 0 by Cramer's rule, and −1/Re λ. */
+        private double[] steadyAndTimeConstant(double[] a, double[] b) {
+            double det = a[1] * b[2] - a[2] * b[1];
             double trace = a[1] + b[2];
             double discriminant = trace * trace - 4 * det;
             double slowest = discriminant >= 0 ? 0.5 * (trace + Math.sqrt(discriminant)) : 0.5 * trace;
-            double tauS = -1 / slowest;
+            return new double[] {(-a[0] * b[2] + a[2] * b[0]) / det, (-a[1] * b[0] + b[1] * a[0]) / det,
+                    -1 / slowest};
+        }
+
+        /** The two-node cool-down by Commons Math's Dormand–Prince 8(5,3); null when it needs too many steps. */
+        CooldownRun integrated(double curveEndS) {
+            double[] a = partRate();
+            double[] b = sinkRate();
+            double[] steady = steadyAndTimeConstant(a, b);
+            double finalK = steady[0];
+            double tauS = steady[2];
             FirstOrderDifferentialEquations equations = new FirstOrderDifferentialEquations() {
                 @Override
                 public int getDimension() {
@@ -248,10 +286,21 @@ public final class CooldownSolver {
                     yDot[1] = b[0] + b[1] * y[0] + b[2] * y[1];
                 }
             };
-            double reachS = tamb <= targetK ? 0.0
-                    : finalK >= targetK ? Double.NaN : timeToTarget(equations, tauS);
+            double reachS = 0.0;
+            if (tamb > targetK) {
+                reachS = Double.NaN;
+                if (finalK < targetK) {
+                    double[] reached = {Double.NaN};
+                    if (!integrate(withTargetEvent(integrator(tauS), reached, tauS), equations,
+                            SEARCH_TIME_CONSTANTS * tauS)) {
+                        return null;
+                    }
+                    reachS = reached[0];
+                }
+            }
             double endS = curveEnd(curveEndS, tauS, reachS);
             List<CooldownSample> curve = new ArrayList<>(CURVE_POINTS);
+            double sampleS = endS / (CURVE_POINTS - 1);
             FixedStepHandler sampler = new FixedStepHandler() {
                 @Override
                 public void init(double t0, double[] y0, double t) {
@@ -260,22 +309,103 @@ public final class CooldownSolver {
 
                 @Override
                 public void handleStep(double t, double[] y, double[] yDot, boolean isLast) {
-                    if (curve.size() < CURVE_POINTS) {
+                    // the normalizer can hand a point over twice (as a bound and as a multiple, or on both sides of
+                    // a step end within round-off): keep it once
+                    boolean repeated = !curve.isEmpty() && t - curve.get(curve.size() - 1).timeS() < 0.5 * sampleS;
+                    if (!repeated && curve.size() < CURVE_POINTS) {
                         curve.add(new CooldownSample(t, y[0], at(th, y[0], y[1])));
                     }
                 }
             };
             DormandPrince853Integrator integrator = integrator(tauS);
-            integrator.addStepHandler(new StepNormalizer(endS / (CURVE_POINTS - 1), sampler,
+            integrator.addStepHandler(new StepNormalizer(sampleS, sampler,
                     StepNormalizerMode.MULTIPLES, StepNormalizerBounds.BOTH));
-            integrate(integrator, equations, endS);
-            return finish(finalK, finalSinkK, tauS, reachS, curve, CooldownRun.Method.DORMAND_PRINCE_853);
+            if (!integrate(integrator, equations, endS)) {
+                return null;
+            }
+            return finish(finalK, steady[1], tauS, reachS, curve, CooldownRun.Method.DORMAND_PRINCE_853);
         }
 
-        /** First time the part reaches the target, s, by an integrator event; NaN if not within the search. */
-        private double timeToTarget(FirstOrderDifferentialEquations equations, double tauS) {
-            double[] reached = {Double.NaN};
-            DormandPrince853Integrator integrator = integrator(tauS);
+        /**
+         * The two-node cool-down by the exponential of its 2x2 matrix (exact for this linear system): with
+         * eigenvalues λ1 ≠ λ2, e^(At) = (e^(λ1·t)(A − λ2·I) − e^(λ2·t)(A − λ1·I))/(λ1 − λ2); with a complex pair
+         * m ± iq, e^(mt)(cos(qt)·I + sin(qt)/q·(A − m·I)); with a double eigenvalue, e^(mt)(I + t(A − m·I))
+         * (Sylvester's formula for 2x2 matrices). The set-point crossing is bracketed on a scan of the curve and
+         * found with Commons Math's Brent solver.
+         */
+        CooldownRun exact(double curveEndS) {
+            double[] a = partRate();
+            double[] b = sinkRate();
+            double[] steady = steadyAndTimeConstant(a, b);
+            double finalK = steady[0];
+            double finalSinkK = steady[1];
+            double tauS = steady[2];
+            double[] start = {tamb - finalK, tamb - finalSinkK};
+            java.util.function.DoubleFunction<double[]> state = t -> {
+                double[] e = exponentialTimes(a[1], a[2], b[1], b[2], t, start);
+                return new double[] {finalK + e[0], finalSinkK + e[1]};
+            };
+            double reachS = 0.0;
+            if (tamb > targetK) {
+                reachS = finalK >= targetK ? Double.NaN : firstCrossing(state, SEARCH_TIME_CONSTANTS * tauS);
+            }
+            double endS = curveEnd(curveEndS, tauS, reachS);
+            List<CooldownSample> curve = new ArrayList<>(CURVE_POINTS);
+            for (int n = 0; n < CURVE_POINTS; n++) {
+                double t = endS * n / (CURVE_POINTS - 1);
+                double[] y = state.apply(t);
+                curve.add(new CooldownSample(t, y[0], at(th, y[0], y[1])));
+            }
+            return finish(finalK, finalSinkK, tauS, reachS, curve, CooldownRun.Method.EXACT_TWO_NODE);
+        }
+
+        /** e^(At)·v for A = [[a11, a12], [a21, a22]] (see {@link #exact}). */
+        private static double[] exponentialTimes(double a11, double a12, double a21, double a22, double t,
+                                                 double[] v) {
+            double m = 0.5 * (a11 + a22);
+            double quarterDiscriminant = 0.25 * (a11 - a22) * (a11 - a22) + a12 * a21;
+            double bx = (a11 - m) * v[0] + a12 * v[1];   // (A − m·I)·v
+            double by = a21 * v[0] + (a22 - m) * v[1];
+            if (quarterDiscriminant > 0) {
+                double q = Math.sqrt(quarterDiscriminant);
+                double e1 = Math.exp((m + q) * t);
+                double e2 = Math.exp((m - q) * t);
+                // (e1(A − λ2 I)v − e2(A − λ1 I)v)/(2q) with A − λ I = (A − m I) − (λ − m) I
+                return new double[] {(e1 * (bx + q * v[0]) - e2 * (bx - q * v[0])) / (2 * q),
+                        (e1 * (by + q * v[1]) - e2 * (by - q * v[1])) / (2 * q)};
+            }
+            double em = Math.exp(m * t);
+            if (quarterDiscriminant < 0) {
+                double q = Math.sqrt(-quarterDiscriminant);
+                double c = Math.cos(q * t);
+                double sq = Math.sin(q * t) / q;
+                return new double[] {em * (c * v[0] + sq * bx), em * (c * v[1] + sq * by)};
+            }
+            return new double[] {em * (v[0] + t * bx), em * (v[1] + t * by)};
+        }
+
+        /** First time the part is at the target: the first sign change on a scan of the horizon, then Brent. */
+        private double firstCrossing(java.util.function.DoubleFunction<double[]> state, double horizonS) {
+            double previousS = 0;
+            for (int n = 1; n <= CROSSING_SCAN_POINTS; n++) {
+                double t = horizonS * n / CROSSING_SCAN_POINTS;
+                if (state.apply(t)[0] <= targetK) {
+                    try {
+                        return new BrentSolver(EVENT_ACCURACY_TIME_CONSTANTS * horizonS / SEARCH_TIME_CONSTANTS)
+                                .solve(MAX_BRENT_EVALUATIONS, time -> state.apply(time)[0] - targetK, previousS, t);
+                    } catch (MathIllegalStateException | MathIllegalArgumentException e) {
+                        throw new IllegalStateException(String.format(java.util.Locale.ROOT,
+                                "set-point crossing not found in [%.4g, %.4g] s", previousS, t), e);
+                    }
+                }
+                previousS = t;
+            }
+            return Double.NaN;
+        }
+
+        /** Adds an event that records the first time the part reaches the target and stops there. */
+        private DormandPrince853Integrator withTargetEvent(DormandPrince853Integrator integrator, double[] reached,
+                                                           double tauS) {
             integrator.addEventHandler(new EventHandler() {
                 @Override
                 public void init(double t0, double[] y0, double t) {
@@ -297,21 +427,28 @@ public final class CooldownSolver {
                 public void resetState(double t, double[] y) {
                     // the state is not changed at the event
                 }
-            }, tauS / 20, EVENT_ACCURACY_TIME_CONSTANTS * tauS, 200);
-            integrate(integrator, equations, SEARCH_TIME_CONSTANTS * tauS);
-            return reached[0];
+            }, tauS / 20, EVENT_ACCURACY_TIME_CONSTANTS * tauS, MAX_BRENT_EVALUATIONS);
+            return integrator;
         }
 
         private static DormandPrince853Integrator integrator(double tauS) {
-            // no smallest step (the system is linear and mildly stiff at most); steps up to a time constant
-            return new DormandPrince853Integrator(0.0, tauS, TEMPERATURE_TOLERANCE_K, RELATIVE_TOLERANCE);
+            // no smallest step (the system is linear, and stiff ones go to the exact solution); steps up to a
+            // time constant; at most MAX_EVALUATIONS right-hand sides
+            DormandPrince853Integrator integrator = new DormandPrince853Integrator(0.0, tauS, TEMPERATURE_TOLERANCE_K,
+                    RELATIVE_TOLERANCE);
+            integrator.setMaxEvaluations(MAX_EVALUATIONS);
+            return integrator;
         }
 
-        private void integrate(DormandPrince853Integrator integrator, FirstOrderDifferentialEquations equations,
-                               double endS) {
+        /** Integrates from ambient to {@code endS}; false when the evaluation cap was reached first. */
+        private boolean integrate(DormandPrince853Integrator integrator, FirstOrderDifferentialEquations equations,
+                                  double endS) {
             double[] y = {tamb, tamb};
             try {
                 integrator.integrate(equations, 0, y.clone(), endS, y);
+                return true;
+            } catch (MaxCountExceededException e) {
+                return false;
             } catch (MathIllegalStateException | MathIllegalArgumentException e) {
                 throw new IllegalStateException(String.format(java.util.Locale.ROOT,
                         "cool-down integration failed at %.4f A over %.1f s", i, endS), e);

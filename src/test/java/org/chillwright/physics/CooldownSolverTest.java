@@ -90,6 +90,35 @@ class CooldownSolverTest {
     }
 
     @Test
+    void theExactTwoNodeSolutionAgreesWithTheIntegrator() {
+        // Two independent routes through the same linear system: Dormand–Prince 8(5,3) and the matrix exponential.
+        var network = new CooldownSolver.Network(TM_A, CASE, SINK_MASS, 2.5);
+        CooldownRun integrated = network.integrated(Double.NaN);
+        CooldownRun exact = network.exact(Double.NaN);
+        assertThat(exact.method()).isEqualTo(CooldownRun.Method.EXACT_TWO_NODE);
+        assertThat(exact.timeToSetPointS()).isCloseTo(integrated.timeToSetPointS(), within(1e-6));
+        assertThat(exact.timeConstantS()).isEqualTo(integrated.timeConstantS());
+        for (int n = 0; n < exact.curve().size(); n++) {
+            assertThat(exact.curve().get(n).timeS()).isCloseTo(integrated.curve().get(n).timeS(), within(1e-9));
+            assertThat(exact.curve().get(n).partK()).isCloseTo(integrated.curve().get(n).partK(), within(1e-7));
+        }
+    }
+
+    @Test
+    void aStiffSinkNodeIsSolvedExactlyAndMatchesAnIndependentIntegration() {
+        // 0.05 J/K behind 0.3 K/W: the sink node settles in milliseconds, the part in minutes (stiff)
+        var stiff = new CooldownSetup(40, 0.02, 0.05, 0.1);
+        CooldownRun run = solver.run(ONE, CASE, stiff, 2.5, 300);
+        assertThat(run.method()).isEqualTo(CooldownRun.Method.EXACT_TWO_NODE);
+        double[][] reference = rk4(CASE, stiff, 2.5, run.curve(), 1e-3);
+        for (int n = 0; n < run.curve().size(); n++) {
+            assertThat(run.curve().get(n).partK()).isCloseTo(reference[n][0], within(1e-6));
+        }
+        double crossingS = rk4Crossing(CASE, stiff, 2.5, CASE.objectK() + 0.1, 1e-3);
+        assertThat(run.timeToSetPointS()).isCloseTo(crossingS, within(1e-3));
+    }
+
+    @Test
     void aHeatSinkWithMassChangesHowFastButNotWhere() {
         // Heat capacities change how fast, not where: the steady balance has no capacity in it (physics.md j).
         // A sink with mass starts at ambient and warms slowly, so early on its hot face is cooler than that of a
