@@ -1,2 +1,2 @@
-/** Lumped thermoelectric module physics: parameters, ratings, operating points, arrays, cascades, generators, transients and dew point, in SI units with kelvin. */
+/** Lumped thermoelectric module physics: parameters, ratings, operating points, arrays, cascades and two-stage stacks, generators, cool-downs, drive ripple, driver sheets and dew point, in SI units with kelvin. */
 package org.chillwright.physics;
