@@ -11,7 +11,7 @@ package org.chillwright.physics;
  * @param currentAtMaxHeatLoadA current at that most heat, A; NaN when it does not apply
  */
 public record Infeasible(Reason reason, String detail, double maxHeatLoadW, double currentAtMaxHeatLoadA)
-        implements OperatingPoint, CascadePoint, DetailedResult {
+        implements OperatingPoint, CascadePoint, DetailedResult, StackPoint {
 
     /** An infeasible point without a capacity figure (a cascade). */
     public Infeasible(Reason reason, String detail) {

@@ -4,7 +4,7 @@ package org.chillwright.physics;
  * How a converter sets the generator's operating point.
  * <ul>
  *   <li>{@link MaximumPowerPoint}: the input tracks the load of most generator power (the numerical optimum of
- *       {@link GeneratorSolver#maxPower}; with heat-exchanger resistances it is not RL = R, physics.md i).</li>
+ *       {@link GeneratorSolver#maxPower}; with heat-exchanger resistances it is not RL = R, the Ioffe 1957 / Rowe 1995 generator equations).</li>
  *   <li>{@link FractionOfOpenCircuit}: the converter holds its input at a fixed fraction k of the open-circuit
  *       voltage it samples with the load disconnected. With ideal heat exchangers k = ½ is the matched load;
  *       converters for thermoelectric sources commonly sample about half (common practice, no source).</li>

@@ -100,10 +100,7 @@ public final class OperatingPointSolver {
         double loadW = coolingCase.heatLoadW();
         double coldK = coolingCase.coldSideAtLoadK();
         if (!(coldK > 0)) {
-            return new Infeasible(Reason.DELTA_T_BEYOND_REACH, format(
-                    "holding the object at %.2f K with %.2f W through %.3f K/W would need the cold face at %.2f K,"
-                            + " at or below absolute zero",
-                    coolingCase.setPointK(), loadW, coolingCase.coldInterfaceKPerW(), coldK));
+            return coldFaceAtAbsoluteZero(coolingCase);
         }
         double currentA = currentForLoadA(s, r, k, coldK, ambientK, rh, loadW);
         if (Double.isNaN(currentA)) {
@@ -117,6 +114,14 @@ public final class OperatingPointSolver {
         }
         return complete(array, module, coolingCase, limits, currentA, voltageV, coldK, hotK, coolingCase.setPointK(),
                 false);
+    }
+
+    /** The case's cold interface would need a cold face at or below 0 K (the first no-solution condition). */
+    static Infeasible coldFaceAtAbsoluteZero(CoolingCase c) {
+        return new Infeasible(Reason.DELTA_T_BEYOND_REACH, format(
+                "holding the object at %.2f K with %.2f W through %.3f K/W would need the cold face at %.2f K,"
+                        + " at or below absolute zero",
+                c.setPointK(), c.heatLoadW(), c.coldInterfaceKPerW(), c.coldSideAtLoadK()));
     }
 
     /**
@@ -219,6 +224,29 @@ public final class OperatingPointSolver {
         double k = module.conductanceWPerK();
         double peakA = peakCurrentA(s, r, k, coldSideK, ambientK, hotPathKPerW, Double.NaN);
         return new CapacityPeak(peakA, coldHeatW(s, r, k, coldSideK, ambientK, hotPathKPerW, peakA));
+    }
+
+    /**
+     * Most heat removable while holding the case's set-point with its heat sink and cold interface, W, with no
+     * current limit: {@link Solved#maxHeatLoadW()} without solving the operating point first; 0 when not even
+     * zero load can be held there.
+     *
+     * @param module      module (or array equivalent) parameters
+     * @param coolingCase the case; its load is not used
+     */
+    static double maxHeatLoadW(ModuleParameters module, CoolingCase coolingCase) {
+        double s = module.seebeckVPerK();
+        double r = module.resistanceOhm();
+        double k = module.conductanceWPerK();
+        double setPointK = coolingCase.setPointK();
+        double ambientK = coolingCase.ambientK();
+        double rh = coolingCase.hotPathKPerW();
+        double peakA = peakCurrentA(s, r, k, setPointK, ambientK, rh, Double.NaN);
+        if (coldHeatW(s, r, k, setPointK, ambientK, rh, peakA) < 0) {
+            return 0.0;
+        }
+        return capacityAtObject(s, r, k, setPointK, coolingCase.coldInterfaceKPerW(), ambientK, rh, 0, peakA, setPointK)
+                .heatW();
     }
 
     /**
@@ -747,7 +775,7 @@ public final class OperatingPointSolver {
     }
 
     /** Dew point of the ambient air, K; NaN without a humidity or outside the model's air range. */
-    private static double dewPointK(CoolingCase c) {
+    static double dewPointK(CoolingCase c) {
         if (!c.hasRelativeHumidity() || !withinDewPointModel(c.ambientK())) {
             return Double.NaN;
         }
@@ -755,7 +783,7 @@ public final class OperatingPointSolver {
     }
 
     /** Frost point of the ambient air, K, when its dew point is below 0 °C; else NaN. */
-    private static double frostPointK(CoolingCase c, double dewPointK) {
+    static double frostPointK(CoolingCase c, double dewPointK) {
         return dewPointK < FREEZING_K ? DEW_POINT.frostPointK(c.ambientK(), c.relativeHumidity()) : Double.NaN;
     }
 
@@ -764,7 +792,8 @@ public final class OperatingPointSolver {
         return airC >= DEW_POINT.lowestAirC() && airC <= DEW_POINT.highestAirC();
     }
 
-    private static List<Warning> warnings(ModuleParameters module, DriveLimits limits, double currentA, double voltageV,
+    /** The risks at a solved point (thresholds common practice, see the constants); empty when none. */
+    static List<Warning> warnings(ModuleParameters module, DriveLimits limits, double currentA, double voltageV,
                                           double coldK, double hotK, double ambientK, double dewPointK,
                                           double frostPointK) {
         List<Warning> warnings = null;

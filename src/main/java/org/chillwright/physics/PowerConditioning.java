@@ -12,7 +12,7 @@ import org.apache.commons.math3.exception.NoBracketingException;
  * A thermoelectric generator through a power converter (see {@link Converter}): the operating point the
  * converter's input strategy holds, the efficiency there, the power delivered after it, and whether the
  * converter starts at all. The open-circuit voltage and the maximum power point come from {@link GeneratorSolver};
- * the fixed-fraction point from a closed form of the same heat-exchanger model (physics.md i), checked against
+ * the fixed-fraction point from a closed form of the same heat-exchanger model (the Ioffe 1957 / Rowe 1995 generator equations), checked against
  * {@link GeneratorSolver#atLoad} in the tests. Stateless and thread-safe.
  */
 public final class PowerConditioning {
@@ -53,8 +53,8 @@ public final class PowerConditioning {
     /**
      * The generator's point where its terminal voltage is k·Voc, Voc its open-circuit voltage
      * ({@link GeneratorSolver#openCircuitV}). With ideal heat exchangers this is the load RL = R·k/(1 − k)
-     * (I = Voc/(R + RL), physics.md i). With finite ones the current is the root of V(I) = k·Voc, where
-     * V(I) = S·ΔT(I) − I·R and ΔT(I) follows from the linear 2x2 heat-exchanger system of physics.md i in closed
+     * (I = Voc/(R + RL), the Ioffe 1957 / Rowe 1995 generator equations). With finite ones the current is the root of V(I) = k·Voc, where
+     * V(I) = S·ΔT(I) − I·R and ΔT(I) follows from the linear 2x2 heat-exchanger system of the Ioffe 1957 / Rowe 1995 generator equations in closed
      * form (Cramer's rule, the two columns summed; derived here):
      * <pre>
      * ΔT = [b1(1 − Rc·S·I) − b2(1 + Rh·S·I)] / det,  b1 = Tsrc + ½Rh·R·I²,  b2 = Tsnk + ½Rc·R·I²,

@@ -1,8 +1,8 @@
 package org.chillwright.physics;
 
 /**
- * A risk at a feasible operating point. All thresholds are common practice (no source), each named
- * beside its constant.
+ * A risk at a feasible operating point or of its drive. All thresholds are common practice (no source),
+ * each named beside its constant.
  *
  * @param code     machine-readable kind
  * @param sentence plain-English sentence with the numbers
@@ -35,6 +35,12 @@ public record Warning(Code code, String sentence) {
         /** Cold face below the ambient frost point + 2 K, when the dew point is below 0 °C (4 K when extrapolated). */
         FROST_RISK,
         /** The array's voltage is above 60 V DC ({@link SafetyLimits#SHOCK_HAZARD_ABOVE_V}). */
-        SHOCK_HAZARD_VOLTAGE
+        SHOCK_HAZARD_VOLTAGE,
+        /** The drive's ripple or pulses cost more than 10 % of the capacity or the COP of a steady current. */
+        DRIVE_LOSS,
+        /** Unfiltered PWM below the tens of kHz usually used. */
+        SLOW_PWM,
+        /** The drive's peak current is above the rated Imax. */
+        PEAK_ABOVE_IMAX
     }
 }

@@ -12,7 +12,7 @@ class DutyCycleTest {
 
     /** Synthetic module TM-A of check-cases.json. */
     private static final ModuleParameters TM_A = new ModuleParameters(0.04, 2.4, 0.25);
-    /** Matched-load power at a 1 K junction difference, ideal exchangers: S²ΔT²/(4R) (physics.md i). */
+    /** Matched-load power at a 1 K junction difference, ideal exchangers: S²ΔT²/(4R) (the Ioffe 1957 / Rowe 1995 generator equations). */
     private static final double POWER_W = 0.04 * 0.04 / (4 * 2.4);
     private static final double HOT_K = 301;
     private static final double COLD_K = 300;

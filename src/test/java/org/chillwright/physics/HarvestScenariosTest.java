@@ -99,7 +99,7 @@ class HarvestScenariosTest {
 
     @Test
     void theStoveModulesHotFaceStaysNearTheTemperatureTheScenarioWarnsAbout() {
-        // Open circuit is the hottest state: only conduction K·ΔT crosses the module, so (physics.md i at I = 0)
+        // Open circuit is the hottest state: only conduction K·ΔT crosses the module, so (the Ioffe 1957 / Rowe 1995 generator equations at I = 0)
         // ΔT = (Tsrc − Tsnk)/(1 + (Rh + Rc)K) and Th = Tsrc − Rh·K·ΔT.
         var stove = HarvestScenarios.stoveFan();
         var s = stove.system();

@@ -21,7 +21,7 @@ class PowerConditioningTest {
 
     @Test
     void trackingTheMaximumPowerPointWithIdealExchangersDeliversTheMatchedLoadPower() {
-        // Source: matched load P = S²ΔT²/(4R), physics.md i (Ioffe, Semiconductor Thermoelements, 1957, from memory).
+        // Source: matched load P = S²ΔT²/(4R), the Ioffe 1957 / Rowe 1995 generator equations (Ioffe, Semiconductor Thermoelements, 1957, from memory).
         var p = conditioning.condition(TM_A, IDEAL, Converter.ideal(InputStrategy.maximumPowerPoint()));
         double expectedW = 0.04 * 0.04 * 70 * 70 / (4 * 2.4);
         assertThat(p.deliveredW()).isCloseTo(expectedW, within(expectedW * 1e-9));
@@ -46,7 +46,7 @@ class PowerConditioningTest {
     @ParameterizedTest(name = "k = {0}")
     @CsvSource({"0.1", "0.3", "0.5", "0.7", "0.95"})
     void aFixedFractionWithIdealExchangersIsTheLoadThatDividesTheVoltage(double k) {
-        // Source: I = Voc/(R + RL) and V = I·RL, physics.md i (Ioffe 1957, from memory): V = k·Voc at RL = R·k/(1 − k).
+        // Source: I = Voc/(R + RL) and V = I·RL, the Ioffe 1957 / Rowe 1995 generator equations (Ioffe 1957, from memory): V = k·Voc at RL = R·k/(1 − k).
         var p = conditioning.atFractionOfOpenCircuit(TM_A, IDEAL, k);
         assertThat(p.loadOhm()).isCloseTo(2.4 * k / (1 - k), within(2.4 * 1e-9));
         double vocV = 0.04 * 70;
@@ -103,7 +103,7 @@ class PowerConditioningTest {
 
     @Test
     void halfTheOpenCircuitVoltageWithExchangersGivesLessThanTracking() {
-        // With finite exchangers the best load is no longer at Voc/2 (physics.md i), so tracking gets more.
+        // With finite exchangers the best load is no longer at Voc/2 (the Ioffe 1957 / Rowe 1995 generator equations), so tracking gets more.
         var half = conditioning.atFractionOfOpenCircuit(TM_A, WITH_EXCHANGERS, 0.5);
         assertThat(half.powerW()).isLessThan(solver.maxPower(TM_A, WITH_EXCHANGERS).powerW());
         assertThat(half.powerW()).isGreaterThan(0.95 * solver.maxPower(TM_A, WITH_EXCHANGERS).powerW());
@@ -133,7 +133,7 @@ class PowerConditioningTest {
 
     @Test
     void rankingPutsTheMostDeliveredPowerFirstAndSetsApartDesignsThatCannotStart() {
-        // Voc = S·ΔT/(1 + (Rh + Rc)·K) at no current (physics.md i): 0.20 V for one module, 0.27, 0.32 and 0.36 V
+        // Voc = S·ΔT/(1 + (Rh + Rc)·K) at no current (the Ioffe 1957 / Rowe 1995 generator equations): 0.20 V for one module, 0.27, 0.32 and 0.36 V
         // for 2, 4 and 8 in series (K grows with the series count, so each gets a smaller ΔT).
         var c = new GeneratorCase(310, 300, 2, 2);
         var converter = new Converter("starts at 0.25 V", 0.25, ConverterEfficiencyTable.constant(0.8),
