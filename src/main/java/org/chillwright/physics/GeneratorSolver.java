@@ -155,12 +155,15 @@ public final class GeneratorSolver {
         double i = p.currentA();
         double r = m.resistanceOhm();
         double emfV = m.seebeckVPerK() * (p.hotJunctionK() - p.coldJunctionK());
-        double circuitSlackV = ENERGY_SLACK * (Math.abs(emfV) + i * (r + p.loadOhm()));
+        // the junction temperatures carry the same round-off as the ordering test allows them (slackK), which
+        // dominates when the source is only nanokelvin above the sink
+        double circuitSlackV = ENERGY_SLACK * (Math.abs(emfV) + i * (r + p.loadOhm())) + m.seebeckVPerK() * slackK;
         double circuitV = emfV - i * (r + p.loadOhm());
         double heatOutW = m.seebeckVPerK() * i * p.coldJunctionK() + 0.5 * i * i * r
                 + m.conductanceWPerK() * (p.hotJunctionK() - p.coldJunctionK());
         double balanceW = p.heatInW() - heatOutW - p.powerW();
-        double balanceSlackW = ENERGY_SLACK * (Math.abs(p.heatInW()) + Math.abs(heatOutW)) + i * circuitSlackV;
+        double balanceSlackW = ENERGY_SLACK * (Math.abs(p.heatInW()) + Math.abs(heatOutW)) + i * circuitSlackV
+                + (m.conductanceWPerK() + m.seebeckVPerK() * i) * slackK;
         boolean ordered = p.coldJunctionK() >= c.coldSinkK() - slackK && p.coldJunctionK() < p.hotJunctionK()
                 && p.hotJunctionK() <= c.hotSourceK() + slackK;
         if (!(ordered && i >= 0 && Math.abs(circuitV) <= circuitSlackV && Math.abs(balanceW) <= balanceSlackW

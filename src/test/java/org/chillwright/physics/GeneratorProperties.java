@@ -76,4 +76,16 @@ class GeneratorProperties {
         double scannedW = GeneratorBruteForce.scanMaxPowerW(array, c);
         assertThat(best.powerW()).isCloseTo(scannedW, within(POWER_AGREEMENT * scannedW));
     }
+
+    /** A source half a nanokelvin above its sink gives next to nothing, and a point that is still physical. */
+    @Example
+    void aSourceNanokelvinAboveTheSinkGivesAPhysicalPoint() {
+        var module = new ModuleParameters(0.01, 0.5, 0.2);
+        var c = new GeneratorCase(285.0000000005, 285.0, 5.0, 5.0);
+
+        GeneratorPoint best = solver.maxPower(module, c);
+
+        GeneratorBruteForce.assertPhysical(module, c, best);
+        assertThat(best.powerW()).isBetween(0.0, 1e-20);
+    }
 }
