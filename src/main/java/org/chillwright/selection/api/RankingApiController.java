@@ -36,7 +36,7 @@ class RankingApiController {
     }
 
     @PostMapping
-    @Operation(summary = "Rank the catalog against a cooling case",
+    @Operation(operationId = "rankCoolers", summary = "Rank the catalog against a cooling case",
             description = "Objectives COP (default), POWER, MARGIN, COST. Obsolete modules are left out unless "
                     + "lifecycles asks for them. elapsedMs is the server time spent ranking.")
     RankingResponse rank(@Valid @RequestBody RankingRequest request) {
