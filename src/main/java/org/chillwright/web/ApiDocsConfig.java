@@ -107,6 +107,7 @@ class ApiDocsConfig {
                 .addProperty("errors", new ArraySchema().items(new Schema<>().$ref("#/components/schemas/"
                         + FIELD_PROBLEM)).description("On bad input: each bad field and what is wrong with it"));
         problem.setRequired(List.of("title", "status"));
+        problem.setAdditionalProperties(true);
         return problem;
     }
 

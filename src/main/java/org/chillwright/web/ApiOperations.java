@@ -10,8 +10,11 @@ import io.swagger.v3.oas.models.media.StringSchema;
 import io.swagger.v3.oas.models.parameters.RequestBody;
 import io.swagger.v3.oas.models.responses.ApiResponse;
 import io.swagger.v3.oas.models.responses.ApiResponses;
+import java.lang.reflect.RecordComponent;
 import java.util.Arrays;
+import java.util.HashSet;
 import java.util.List;
+import java.util.Set;
 import org.springdoc.core.customizers.OperationCustomizer;
 import org.springframework.core.MethodParameter;
 import org.springframework.core.annotation.AnnotatedElementUtils;
@@ -28,10 +31,12 @@ import org.springframework.web.method.HandlerMethod;
  * ({@code application/problem+json}, schema {@value #PROBLEM}); and CSV where the route reads or writes CSV.
  * <ul>
  * <li>400 where it reads a body or a parameter (bad input, named field by field in {@code errors});</li>
- * <li>401 and 429 everywhere: any request may carry credentials, and wrong ones are refused, and throttled;</li>
+ * <li>401 and 429 everywhere: any request may carry credentials, and wrong ones are refused, and throttled; 406
+ * everywhere: an Accept header may allow none of the route's media types;</li>
  * <li>403 and 409 where an account's role is checked ({@code @PreAuthorize}) and the request changes something
  * (a role that may not; a stale version, a name taken, a state the workflow refuses); 403 alone on a read;</li>
- * <li>404 where the address names a record; 415 where it reads a body.</li>
+ * <li>404 where the request names a record: in its address, or by an id in its body ({@code moduleId},
+ * {@code listId}, at any depth); 415 where it reads a body.</li>
  * </ul>
  */
 class ApiOperations implements OperationCustomizer {
@@ -48,8 +53,11 @@ class ApiOperations implements OperationCustomizer {
         boolean write = mapping != null && Arrays.stream(mapping.method()).anyMatch(m -> m != RequestMethod.GET);
         boolean readsBody = operation.getRequestBody() != null || !consumes.isEmpty();
         boolean readsParameters = Arrays.stream(handler.getMethodParameters()).anyMatch(ApiOperations::isParameter);
-        boolean namesRecord = Arrays.stream(handler.getMethodParameters())
+        boolean addressNamesRecord = Arrays.stream(handler.getMethodParameters())
                 .anyMatch(p -> p.hasParameterAnnotation(PathVariable.class));
+        boolean bodyNamesRecord = Arrays.stream(handler.getMethodParameters())
+                .filter(p -> p.hasParameterAnnotation(org.springframework.web.bind.annotation.RequestBody.class))
+                .anyMatch(p -> namesRecord(p.getParameterType(), new HashSet<>()));
         boolean roleChecked = AnnotatedElementUtils.hasAnnotation(handler.getMethod(), PreAuthorize.class)
                 || AnnotatedElementUtils.hasAnnotation(handler.getBeanType(), PreAuthorize.class);
 
@@ -61,7 +69,7 @@ class ApiOperations implements OperationCustomizer {
             csvAnswer(operation.getResponses());
         }
         var responses = operation.getResponses();
-        if (readsBody || readsParameters || namesRecord) {
+        if (readsBody || readsParameters || addressNamesRecord) {
             problem(responses, "400", "Bad input: the body, a parameter or the address could not be read or breaks a "
                     + "rule; errors names each field and what was expected");
         }
@@ -69,9 +77,11 @@ class ApiOperations implements OperationCustomizer {
         if (roleChecked) {
             problem(responses, "403", "The account's roles do not allow this request");
         }
-        if (namesRecord) {
-            problem(responses, "404", "The address names a record that does not exist");
+        if (addressNamesRecord || bodyNamesRecord) {
+            problem(responses, "404", "The request names a record (in its address or by an id in its body) that "
+                    + "does not exist");
         }
+        problem(responses, "406", "The Accept header allows none of the media types this route answers in");
         if (roleChecked && write) {
             problem(responses, "409", "Refused as it stands: a stale version (reload and apply again), a name already "
                     + "taken, or a change the workflow does not allow; the detail says which");
@@ -84,6 +94,21 @@ class ApiOperations implements OperationCustomizer {
         responses.get("429").addHeaderObject("Retry-After", new Header()
                 .description("Seconds until sign-ins are accepted again").schema(new IntegerSchema()));
         return operation;
+    }
+
+    /** Whether a request body of this type can carry the id of a stored record ({@code moduleId}, {@code listId}). */
+    private static boolean namesRecord(Class<?> type, Set<Class<?>> seen) {
+        if (!type.isRecord() || !seen.add(type)) {
+            return false;
+        }
+        for (RecordComponent component : type.getRecordComponents()) {
+            boolean id = component.getName().endsWith("Id")
+                    && (component.getType() == Long.class || component.getType() == long.class);
+            if (id || namesRecord(component.getType(), seen)) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static boolean isParameter(MethodParameter parameter) {

@@ -28,8 +28,9 @@ import tools.jackson.databind.node.ObjectNode;
  * The committed OpenAPI document as a contract that answers can be held to: for a request's method and path it
  * finds the operation and checks the answer's status (documented for that operation), its content type (one the
  * status documents) and its body (valid against that content's schema, JSON Schema 2020-12 with the OpenAPI 3.1
- * dialect, by com.networknt:json-schema-validator). A path no operation matches must be answered with an error
- * problem body.
+ * dialect, by com.networknt:json-schema-validator), and no field of the body may be one the schema does not name
+ * (unless it says {@code additionalProperties}, as the problem body does). A path no operation matches must be
+ * answered with an error problem body.
  */
 public final class ApiContract {
 
@@ -152,9 +153,52 @@ public final class ApiContract {
         } catch (JacksonException e) {
             return List.of(what + " with a body that is not JSON");
         }
-        var errors = schemaAt(pointer).validate(value);
-        return errors.stream().map(e -> what + ": " + e.getInstanceLocation() + " " + e.getMessage()
-                + " (schema " + e.getSchemaLocation() + ")").toList();
+        var found = new ArrayList<String>();
+        schemaAt(pointer).validate(value).forEach(e -> found.add(what + ": " + e.getInstanceLocation() + " "
+                + e.getMessage() + " (schema " + e.getSchemaLocation() + ")"));
+        if (found.isEmpty()) {
+            undocumentedFields(document.at(pointer.substring(1)), value, "$", what, found);
+        }
+        return found;
+    }
+
+    /** Fields of an answer that its (valid) schema does not name: the document would not tell a client of them. */
+    private void undocumentedFields(JsonNode schema, JsonNode value, String at, String what, List<String> found) {
+        schema = resolve(schema);
+        if (schema.has("anyOf")) {
+            for (JsonNode branch : schema.get("anyOf")) {
+                JsonNode resolved = resolve(branch);
+                if (value.isNull() == resolved.path("type").asString("").equals("null")) {
+                    undocumentedFields(resolved, value, at, what, found);
+                    return;
+                }
+            }
+            return;
+        }
+        if (value.isObject() && schema.has("properties")) {
+            JsonNode properties = schema.get("properties");
+            boolean open = schema.has("additionalProperties") && !schema.get("additionalProperties").equals(
+                    JSON.getNodeFactory().booleanNode(false));
+            value.properties().forEach(field -> {
+                if (properties.has(field.getKey())) {
+                    undocumentedFields(properties.get(field.getKey()), field.getValue(), at + "." + field.getKey(),
+                            what, found);
+                } else if (!open) {
+                    found.add(what + ": " + at + "." + field.getKey() + " is a field the document does not name");
+                }
+            });
+        } else if (value.isArray() && schema.has("items")) {
+            for (int i = 0; i < value.size(); i++) {
+                undocumentedFields(schema.get("items"), value.get(i), at + "[" + i + "]", what, found);
+            }
+        }
+    }
+
+    private JsonNode resolve(JsonNode schema) {
+        while (schema.has("$ref") && schema.get("$ref").asString().startsWith("#/")) {
+            schema = document.at(schema.get("$ref").asString().substring(1));
+        }
+        return schema;
     }
 
     /** The schema at a JSON pointer into the document, its references resolved in the document. */
