@@ -116,7 +116,11 @@ class ApiDocsConfig {
                 .addProperty("field", new StringSchema().description("The field's path in the request, such as "
                         + "module.imaxA, or the query parameter's name"))
                 .addProperty("message", new StringSchema().description("What was expected and what came in (never "
-                        + "the value of a secret)"));
+                        + "the value of a secret)"))
+                .addProperty("row", new IntegerSchema().description("CSV import: the line as a spreadsheet "
+                        + "numbers it (the header is row 1)"))
+                .addProperty("column", new StringSchema().description("CSV import: the column's name, empty when "
+                        + "the problem is the whole row"));
         field.setRequired(List.of("field", "message"));
         return field;
     }
