@@ -139,7 +139,7 @@ class ApiDocsConfig {
     OpenApiCustomizer apiNullsAndExamples() {
         var examples = ApiExamples.load();
         return document -> {
-            ApiSchemas.admitNulls(document);
+            ApiSchemas.complete(document);
             examples.applyTo(document);
         };
     }

@@ -16,6 +16,7 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
 import org.springdoc.core.customizers.OperationCustomizer;
+import org.springframework.core.DefaultParameterNameDiscoverer;
 import org.springframework.core.MethodParameter;
 import org.springframework.core.annotation.AnnotatedElementUtils;
 import org.springframework.security.access.prepost.PreAuthorize;
@@ -61,8 +62,16 @@ class ApiOperations implements OperationCustomizer {
         boolean roleChecked = AnnotatedElementUtils.hasAnnotation(handler.getMethod(), PreAuthorize.class)
                 || AnnotatedElementUtils.hasAnnotation(handler.getBeanType(), PreAuthorize.class);
 
+        if (operation.getParameters() != null) {
+            for (MethodParameter parameter : handler.getMethodParameters()) {
+                parameter.initParameterNameDiscovery(new DefaultParameterNameDiscoverer());
+                operation.getParameters().stream().filter(p -> p.getName().equals(parameter.getParameterName()))
+                        .forEach(p -> ApiSchemas.bounds(parameter::getParameterAnnotation, p.getSchema()));
+            }
+        }
         if (consumes.contains(TEXT_CSV) && operation.getRequestBody() == null) {
-            operation.setRequestBody(new RequestBody().required(true).description("The CSV file, UTF-8, header row first")
+            operation.setRequestBody(new RequestBody().required(true)
+                    .description("The CSV file, UTF-8, header row first")
                     .content(new Content().addMediaType(TEXT_CSV, new MediaType().schema(new StringSchema()))));
         }
         if (produces.contains(TEXT_CSV)) {
@@ -112,7 +121,8 @@ class ApiOperations implements OperationCustomizer {
     }
 
     private static boolean isParameter(MethodParameter parameter) {
-        return parameter.hasParameterAnnotation(RequestParam.class) || parameter.hasParameterAnnotation(PathVariable.class);
+        return parameter.hasParameterAnnotation(RequestParam.class)
+                || parameter.hasParameterAnnotation(PathVariable.class);
     }
 
     /** The CSV download: text, whichever status springdoc put first. */
@@ -134,6 +144,7 @@ class ApiOperations implements OperationCustomizer {
             return;
         }
         responses.addApiResponse(status, new ApiResponse().description(description).content(new Content()
-                .addMediaType(PROBLEM_JSON, new MediaType().schema(new Schema<>().$ref("#/components/schemas/" + PROBLEM)))));
+                .addMediaType(PROBLEM_JSON, new MediaType()
+                        .schema(new Schema<>().$ref("#/components/schemas/" + PROBLEM)))));
     }
 }

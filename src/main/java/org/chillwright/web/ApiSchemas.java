@@ -1,5 +1,6 @@
 package org.chillwright.web;
 
+import com.fasterxml.jackson.annotation.JsonInclude;
 import com.fasterxml.jackson.annotation.JsonUnwrapped;
 import io.swagger.v3.core.converter.AnnotatedType;
 import io.swagger.v3.core.converter.ModelConverter;
@@ -8,8 +9,15 @@ import io.swagger.v3.core.util.Json;
 import io.swagger.v3.oas.models.OpenAPI;
 import io.swagger.v3.oas.models.media.Schema;
 import jakarta.annotation.Nullable;
+import jakarta.validation.constraints.DecimalMax;
+import jakarta.validation.constraints.DecimalMin;
+import jakarta.validation.constraints.Positive;
+import jakarta.validation.constraints.PositiveOrZero;
+import java.lang.annotation.Annotation;
 import java.lang.reflect.RecordComponent;
+import java.math.BigDecimal;
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.Iterator;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -17,6 +25,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.function.Function;
 
 /**
  * How the API's records become the document's schemas, in one place.
@@ -28,6 +37,11 @@ import java.util.concurrent.ConcurrentHashMap;
  * <li><b>Nulls.</b> A record component that may be null carries {@link Nullable}; its property then admits
  * {@code null} (OpenAPI 3.1: {@code "null"} in the type, in an enum's values, or beside a reference as
  * {@code anyOf}). Properties of a component marked {@link JsonUnwrapped} are found in the unwrapped record.</li>
+ * <li><b>Presence.</b> In a record that only answers carry (no request body reaches it), every property that is
+ * not left out when null ({@link JsonInclude}) is always there, if only as {@code null}, so it is required.</li>
+ * <li><b>Bounds.</b> Bean Validation's exclusive bounds ({@code @DecimalMin(inclusive = false)},
+ * {@code @Positive}, ...) become {@code exclusiveMinimum}/{@code exclusiveMaximum}; springdoc wrote them as
+ * inclusive or not at all.</li>
  * </ul>
  * Schema names are a function of the class, so the register of which class a name stands for holds the same
  * entries whichever application context filled it (springdoc keeps converters in one registry per JVM).
@@ -68,13 +82,14 @@ class ApiSchemas implements ModelConverter {
         return prefix + type.getSimpleName();
     }
 
-    /** Makes every property whose record component is {@link Nullable} admit {@code null}. */
+    /** Completes the schema of every API record from its components: nulls, presence and exclusive bounds. */
     @SuppressWarnings("rawtypes")
-    static void admitNulls(OpenAPI document) {
+    static void complete(OpenAPI document) {
         if (document.getComponents() == null || document.getComponents().getSchemas() == null) {
             return;
         }
         Map<String, Schema> schemas = document.getComponents().getSchemas();
+        Set<String> requested = requestSide(document);
         schemas.forEach((name, schema) -> {
             Class<?> type = CLASSES_BY_NAME.get(name);
             Map<String, Schema> properties = schema.getProperties();
@@ -84,12 +99,95 @@ class ApiSchemas implements ModelConverter {
             // swagger-core marks the referenced record itself when a property of its type is @Nullable; the record
             // is an object, and the property (below) is what may be null
             schema.setTypes(new LinkedHashSet<>(List.of("object")));
+            var required = new ArrayList<String>(schema.getRequired() == null ? List.of() : schema.getRequired());
             for (String property : List.copyOf(properties.keySet())) {
-                if (component(type, property).map(c -> c.isAnnotationPresent(Nullable.class)).orElse(false)) {
+                var component = component(type, property);
+                if (component.isEmpty()) {
+                    continue;
+                }
+                var accessor = component.get().getAccessor();
+                bounds(accessor::getAnnotation, properties.get(property));
+                boolean nullable = component.get().isAnnotationPresent(Nullable.class);
+                if (nullable) {
                     properties.put(property, admitNull(properties.get(property)));
                 }
+                // Jackson writes every component, null or not, unless told to leave nulls out
+                boolean alwaysThere = component.get().getType().isPrimitive() || !leftOutWhenNull(component.get());
+                if (!requested.contains(name) && alwaysThere && !required.contains(property)) {
+                    required.add(property);
+                }
             }
+            schema.setRequired(required.isEmpty() ? null : required);
         });
+    }
+
+    /** The exclusive (and the sign) bounds of a field or parameter, which springdoc does not carry over. */
+    static void bounds(Function<Class<? extends Annotation>, Annotation> annotation, Schema<?> schema) {
+        if (annotation.apply(DecimalMin.class) instanceof DecimalMin min && !min.inclusive()) {
+            schema.setMinimum(null);
+            schema.setExclusiveMinimumValue(new BigDecimal(min.value()));
+        }
+        if (annotation.apply(DecimalMax.class) instanceof DecimalMax max && !max.inclusive()) {
+            schema.setMaximum(null);
+            schema.setExclusiveMaximumValue(new BigDecimal(max.value()));
+        }
+        if (annotation.apply(Positive.class) != null && schema.getExclusiveMinimumValue() == null) {
+            schema.setMinimum(null);
+            schema.setExclusiveMinimumValue(BigDecimal.ZERO);
+        }
+        if (annotation.apply(PositiveOrZero.class) != null && schema.getMinimum() == null) {
+            schema.setMinimum(BigDecimal.ZERO);
+        }
+    }
+
+    /** Whether Jackson leaves the component out of the JSON when it is null. */
+    private static boolean leftOutWhenNull(RecordComponent component) {
+        JsonInclude own = component.getAccessor().getAnnotation(JsonInclude.class);
+        JsonInclude record = component.getDeclaringRecord().getAnnotation(JsonInclude.class);
+        JsonInclude rule = own != null ? own : record;
+        return rule != null && rule.value() != JsonInclude.Include.ALWAYS
+                && rule.value() != JsonInclude.Include.USE_DEFAULTS;
+    }
+
+    /** The schemas a request body or parameter can reach: their properties are the client's choice to send. */
+    @SuppressWarnings("rawtypes")
+    private static Set<String> requestSide(OpenAPI document) {
+        var reached = new HashSet<String>();
+        if (document.getPaths() != null) {
+            document.getPaths().values().forEach(item -> item.readOperations().forEach(operation -> {
+                if (operation.getRequestBody() != null && operation.getRequestBody().getContent() != null) {
+                    operation.getRequestBody().getContent().values()
+                            .forEach(media -> reach(media.getSchema(), document, reached));
+                }
+                if (operation.getParameters() != null) {
+                    operation.getParameters().forEach(parameter -> reach(parameter.getSchema(), document, reached));
+                }
+            }));
+        }
+        return reached;
+    }
+
+    @SuppressWarnings({"rawtypes", "unchecked"})
+    private static void reach(Schema schema, OpenAPI document, Set<String> reached) {
+        if (schema == null) {
+            return;
+        }
+        if (schema.get$ref() != null) {
+            String name = schema.get$ref().substring(schema.get$ref().lastIndexOf('/') + 1);
+            if (reached.add(name)) {
+                reach(document.getComponents().getSchemas().get(name), document, reached);
+            }
+            return;
+        }
+        if (schema.getProperties() != null) {
+            ((Map<String, Schema>) schema.getProperties()).values().forEach(p -> reach(p, document, reached));
+        }
+        reach(schema.getItems(), document, reached);
+        for (List<Schema> branches : java.util.Arrays.asList(schema.getAnyOf(), schema.getOneOf(), schema.getAllOf())) {
+            if (branches != null) {
+                branches.forEach(b -> reach(b, document, reached));
+            }
+        }
     }
 
     /** The record component behind a JSON property, looking into unwrapped components too. */

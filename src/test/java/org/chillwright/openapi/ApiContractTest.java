@@ -15,9 +15,14 @@ class ApiContractTest {
         return json.getBytes(StandardCharsets.UTF_8);
     }
 
+    /** An operating point as the server writes one: every field there, figures not worked out as null. */
     private static String point(String dewPoint) {
-        return "{\"feasible\":true,\"reason\":null,\"currentA\":2.1,\"dewPointC\":" + dewPoint
-                + ",\"warnings\":[{\"code\":\"NEAR_IMAX\",\"message\":\"close\"}],\"seriesCount\":1,\"parallelCount\":1}";
+        return "{\"feasible\":true,\"reason\":null,\"currentA\":2.1,\"voltageV\":5.2,\"powerW\":10.9,\"cop\":1.1,"
+                + "\"setPointC\":20,\"coldSideC\":19.4,\"hotSideC\":51.2,\"heatLoadW\":12,\"heatRejectedW\":22.9,"
+                + "\"fractionOfImax\":0.36,\"maxHeatLoadW\":null,\"currentAtMaxHeatLoadA\":null,\"loadMarginPct\":null,"
+                + "\"marginK\":null,\"copOptimalCurrentA\":null,\"maxCop\":null,\"dewPointC\":" + dewPoint
+                + ",\"frostPointC\":null,\"warnings\":[{\"code\":\"NEAR_IMAX\",\"message\":\"close\"}],"
+                + "\"perModule\":null,\"seriesCount\":1,\"parallelCount\":1}";
     }
 
     @Test
@@ -43,6 +48,13 @@ class ApiContractTest {
         String extra = point("1").replace("{\"feasible\"", "{\"surprise\":1,\"feasible\"");
         assertThat(contract.violations("POST", "/api/v1/operating-point", 200, "application/json", body(extra), false))
                 .singleElement().asString().contains("$.surprise");
+    }
+
+    @Test
+    void aFieldAnAnswerAlwaysHasIsMissedWhenAbsent() {
+        String without = point("1").replace("\"frostPointC\":null,", "");
+        assertThat(contract.violations("POST", "/api/v1/operating-point", 200, "application/json", body(without),
+                false)).singleElement().asString().contains("frostPointC");
     }
 
     @Test

@@ -210,6 +210,23 @@ class OpenApiDocumentTest {
                 .toString()).doesNotContain("null");
     }
 
+    @Test
+    void answersRequireWhatIsAlwaysThereAndBoundsStayExclusive() throws Exception {
+        served();
+        JsonNode schemas = document.path("components").path("schemas");
+        assertThat(schemas.path("OperatingPointResponse").path("required").toString())
+                .contains("\"feasible\"", "\"warnings\"", "\"seriesCount\"", "\"dewPointC\"");
+        assertThat(schemas.path("ModuleResponse").path("required").toString())
+                .contains("\"id\"", "\"version\"", "\"archived\"").doesNotContain("\"description\"");
+        assertThat(schemas.path("RankingRequest").path("required").toString())
+                .as("a request requires only what its record requires").doesNotContain("\"limit\"");
+        JsonNode ambient = schemas.path("OperatingPointRequest").path("properties").path("ambientC");
+        assertThat(ambient.path("exclusiveMinimum").asDouble()).isEqualTo(-273.15);
+        assertThat(ambient.has("minimum")).isFalse();
+        assertThat(schemas.path("ModuleInput").path("properties").path("imaxA").path("exclusiveMinimum").asDouble())
+                .isZero();
+    }
+
     private static void collect(JsonNode node, String key, List<String> into) {
         if (node.isObject()) {
             node.properties().forEach(e -> {
