@@ -4,6 +4,7 @@ import static org.springframework.http.HttpMethod.GET;
 import static org.springframework.http.HttpMethod.POST;
 
 import org.chillwright.web.ProblemWriter;
+import org.springdoc.core.customizers.OpenApiCustomizer;
 import org.chillwright.web.RequestLogFilter;
 import org.springframework.beans.factory.annotation.Value;
 import org.springframework.context.annotation.Bean;
@@ -65,6 +66,12 @@ class SecurityConfig {
 
     SecurityConfig(@Value("${chillwright.access.open-reads:false}") boolean openReads) {
         this.openReads = openReads;
+    }
+
+    /** The sign-in part of the OpenAPI document, from the same route lists as the filter chain below. */
+    @Bean
+    OpenApiCustomizer apiSecurityDocs() {
+        return new ApiSecurityDocs(openReads);
     }
 
     @Bean

@@ -1,5 +1,6 @@
 package org.chillwright.approval;
 
+import jakarta.annotation.Nullable;
 import java.time.Instant;
 
 /**
@@ -11,8 +12,9 @@ import java.time.Instant;
  *        recorded before approvals named them)
  * @param qualifiedBy on an approval, who had moved the entry to QUALIFYING
  */
-public record AuditView(Instant at, String by, Long entryId, EntryState from, EntryState to, String reason,
-        String action, String proposedBy, String qualifiedBy) {
+public record AuditView(Instant at, String by, @Nullable Long entryId, @Nullable EntryState from,
+        @Nullable EntryState to, String reason, String action, @Nullable String proposedBy,
+        @Nullable String qualifiedBy) {
 
     /** Whether this line is an approval by someone other than its proposer and its qualifier. */
     public boolean independentApproval() {

@@ -1,5 +1,6 @@
 package org.chillwright.approval;
 
+import jakarta.annotation.Nullable;
 import java.time.Instant;
 
 /**
@@ -8,7 +9,8 @@ import java.time.Instant;
  *
  * @param qualifiedBy who last moved the entry to QUALIFYING, or null when nobody has yet
  */
-public record EntryView(long id, long version, long moduleId, String supplier, String partNumber, String lifecycle,
-        EntryState state, String note, String commercialNote, Long replacedByEntryId, String proposedBy,
-        Instant proposedAt, String changedBy, Instant changedAt, String qualifiedBy) {
+public record EntryView(long id, long version, long moduleId, @Nullable String supplier, @Nullable String partNumber,
+        @Nullable String lifecycle, EntryState state, @Nullable String note, @Nullable String commercialNote,
+        @Nullable Long replacedByEntryId, String proposedBy, Instant proposedAt, String changedBy, Instant changedAt,
+        @Nullable String qualifiedBy) {
 }

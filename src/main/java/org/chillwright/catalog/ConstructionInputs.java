@@ -1,5 +1,6 @@
 package org.chillwright.catalog;
 
+import jakarta.annotation.Nullable;
 import org.chillwright.physics.LegConstruction;
 import org.chillwright.physics.Units;
 
@@ -10,11 +11,11 @@ import org.chillwright.physics.Units;
  * @param legAreaNMm2             optional: the n-leg area when it differs from the p-leg area
  * @param contactResistivityOhmM2 optional: electrical contact resistance per leg end, 0 when absent
  */
-public record ConstructionInputs(Integer couples, Double legAreaMm2, Double legAreaNMm2, Double legLengthMm,
+public record ConstructionInputs(Integer couples, Double legAreaMm2, @Nullable Double legAreaNMm2, Double legLengthMm,
                                  Double seebeckPVPerK, Double seebeckNVPerK,
                                  Double resistivityPOhmM, Double resistivityNOhmM,
                                  Double conductivityPWPerMK, Double conductivityNWPerMK,
-                                 Double contactResistivityOhmM2) {
+                                 @Nullable Double contactResistivityOhmM2) {
 
     /** The construction for the physics engine; call only on checked inputs. */
     public LegConstruction toLegConstruction() {

@@ -1,5 +1,6 @@
 package org.chillwright.catalog;
 
+import jakarta.annotation.Nullable;
 import java.util.List;
 
 /**
@@ -22,7 +23,7 @@ public record ImportReport(List<RowChange> changes, List<CsvRowError> errors, bo
      * @param moduleId       the stored module the row matches, null for a new one in a preview
      * @param changedColumns for an update, the columns whose value changes
      */
-    public record RowChange(int row, String supplier, String partNumber, Kind kind, Long moduleId,
+    public record RowChange(int row, String supplier, String partNumber, Kind kind, @Nullable Long moduleId,
                             List<String> changedColumns) {
     }
 

@@ -1,5 +1,6 @@
 package org.chillwright.catalog;
 
+import jakarta.annotation.Nullable;
 import org.chillwright.physics.MaxRatings;
 import org.chillwright.physics.RatingsMethod;
 import org.chillwright.physics.Units;
@@ -12,8 +13,8 @@ import org.chillwright.physics.Units;
  * @param method         which three ratings fix the parameters; null means the default
  * @param testAtmosphere optional
  */
-public record RatedInputs(Double imaxA, Double vmaxV, Double qmaxW, Double dtmaxK, Double hotSideC,
-                          RatingsMethod method, TestAtmosphere testAtmosphere) {
+public record RatedInputs(Double imaxA, Double vmaxV, @Nullable Double qmaxW, Double dtmaxK, Double hotSideC,
+                          RatingsMethod method, @Nullable TestAtmosphere testAtmosphere) {
 
     public RatedInputs {
         method = method == null ? RatingsMethod.IMAX_VMAX_DTMAX : method;

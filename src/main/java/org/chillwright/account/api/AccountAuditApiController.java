@@ -1,5 +1,7 @@
 package org.chillwright.account.api;
 
+import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.servlet.http.HttpServletResponse;
 import java.io.IOException;
 import java.util.List;
@@ -12,6 +14,7 @@ import org.springframework.web.bind.annotation.RestController;
 
 /** {@code GET /api/v1/users/audit}: the whole account audit trail, oldest first, as JSON or CSV. */
 @RestController
+@Tag(name = "Accounts")
 @PreAuthorize("hasRole('ADMIN')")
 class AccountAuditApiController {
 
@@ -24,11 +27,13 @@ class AccountAuditApiController {
     }
 
     @GetMapping(value = PATH, produces = "application/json")
+    @Operation(operationId = "getAccountAudit", summary = "The account audit trail, oldest first, as JSON or CSV")
     List<AccountAuditView> all() {
         return audit.all();
     }
 
     @GetMapping(value = PATH, produces = "text/csv")
+    @Operation(operationId = "getAccountAudit", summary = "The account audit trail, oldest first, as JSON or CSV")
     void csv(HttpServletResponse response) throws IOException {
         CsvDownload.send(response, "account-audit.csv", audit::writeCsv);
     }

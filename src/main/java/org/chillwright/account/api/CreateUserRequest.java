@@ -12,7 +12,7 @@ import org.chillwright.web.SecretFields;
 
 /** {@code POST /api/v1/users}: a new account. */
 public record CreateUserRequest(
-        @NotBlank @Size(min = 2, max = 64) @Pattern(regexp = "[A-Za-z0-9._-]+",
+        @NotBlank @Size(min = 2, max = 64) @Pattern(regexp = "^[A-Za-z0-9._-]+$",
                 message = "may hold only letters, digits, '.', '_' and '-'") String username,
         @Secret @NotBlank @Size(min = Passwords.MIN_LENGTH, max = Passwords.MAX_LENGTH,
                 message = Passwords.LENGTH_MESSAGE) String password,

@@ -1,5 +1,7 @@
 package org.chillwright.account.api;
 
+import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.validation.Valid;
 import java.security.Principal;
 import org.chillwright.account.AccountService;
@@ -13,6 +15,7 @@ import org.springframework.web.bind.annotation.RestController;
 /** The signed-in user's own account. */
 @RestController
 @RequestMapping("/api/v1/account")
+@Tag(name = "Accounts")
 class OwnAccountApiController {
 
     private final AccountService accounts;
@@ -24,6 +27,7 @@ class OwnAccountApiController {
     /** Changes the caller's password; a wrong current password is a 400 naming {@code currentPassword}. */
     @PutMapping("/password")
     @ResponseStatus(HttpStatus.NO_CONTENT)
+    @Operation(operationId = "changeOwnPassword", summary = "Change your own password")
     void changePassword(@Valid @RequestBody OwnPasswordRequest request, Principal me) {
         accounts.changeOwnPassword(me.getName(), request.currentPassword(), request.newPassword());
     }

@@ -1,5 +1,7 @@
 package org.chillwright.account.api;
 
+import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.validation.Valid;
 import java.security.Principal;
 import org.chillwright.account.TeamSettings;
@@ -14,6 +16,7 @@ import org.springframework.web.bind.annotation.RestController;
 /** {@code /api/v1/settings}: the team's settings; anyone signed in reads them, administrators change them. */
 @RestController
 @RequestMapping("/api/v1/settings")
+@Tag(name = "Team settings", description = "Settings of the whole team, such as four eyes on approvals")
 class TeamSettingsApiController {
 
     private final TeamSettings settings;
@@ -23,6 +26,7 @@ class TeamSettingsApiController {
     }
 
     @GetMapping
+    @Operation(operationId = "getSettings", summary = "The team's settings")
     TeamSettingsView show() {
         return settings.current();
     }
@@ -30,6 +34,8 @@ class TeamSettingsApiController {
     /** Changes the settings; the change is recorded in the account audit trail. */
     @PutMapping
     @PreAuthorize("hasRole('ADMIN')")
+    @Operation(operationId = "updateSettings",
+            summary = "Change the team's settings (administrators); recorded in the account audit trail")
     TeamSettingsView change(@Valid @RequestBody TeamSettingsRequest request, Principal me) {
         return settings.setFourEyesApproval(request.fourEyesApproval(), request.version(), me.getName());
     }

@@ -1,5 +1,7 @@
 package org.chillwright.account.api;
 
+import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.validation.Valid;
 import java.security.Principal;
 import org.chillwright.account.AccountService;
@@ -17,6 +19,7 @@ import org.springframework.web.bind.annotation.RestController;
 /** Accounts, for administrators. */
 @RestController
 @RequestMapping("/api/v1/users")
+@Tag(name = "Accounts", description = "Accounts, the account audit trail and your own password")
 @PreAuthorize("hasRole('ADMIN')")
 class UserApiController {
 
@@ -28,6 +31,7 @@ class UserApiController {
 
     @PostMapping
     @ResponseStatus(HttpStatus.CREATED)
+    @Operation(operationId = "createUser", summary = "Create an account with its roles (administrators)")
     AccountView create(@Valid @RequestBody CreateUserRequest request, Principal me) {
         return accounts.create(request.username(), request.password(), request.roles(), me.getName());
     }
@@ -35,6 +39,7 @@ class UserApiController {
     /** Sets a new password for someone who lost theirs; their sessions end. */
     @PutMapping("/{id}/password")
     @ResponseStatus(HttpStatus.NO_CONTENT)
+    @Operation(operationId = "resetUserPassword", summary = "Set a new password for someone else; their sessions end")
     void resetPassword(@PathVariable long id, @Valid @RequestBody PasswordResetRequest request, Principal me) {
         accounts.resetPassword(id, request.password(), me.getName());
     }

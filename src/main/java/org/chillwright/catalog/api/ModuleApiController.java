@@ -1,5 +1,10 @@
 package org.chillwright.catalog.api;
 
+import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.media.Content;
+import io.swagger.v3.oas.annotations.media.Schema;
+import io.swagger.v3.oas.annotations.responses.ApiResponse;
+import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.servlet.http.HttpServletRequest;
 import java.io.IOException;
 import java.io.InputStreamReader;
@@ -35,6 +40,7 @@ import org.springframework.web.bind.annotation.PutMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RequestParam;
+import org.springframework.web.bind.annotation.ResponseStatus;
 import org.springframework.web.bind.annotation.RestController;
 
 /**
@@ -43,6 +49,7 @@ import org.springframework.web.bind.annotation.RestController;
  */
 @RestController
 @RequestMapping("/api/v1/modules")
+@Tag(name = "Catalog", description = "The team's modules: search, read, add, change, archive; CSV import and export")
 class ModuleApiController {
 
     static final String TEXT_CSV = "text/csv";
@@ -60,6 +67,7 @@ class ModuleApiController {
     }
 
     @GetMapping
+    @Operation(operationId = "searchModules", summary = "Search the catalog, one page at a time")
     ModuleListResponse search(@RequestParam(required = false) String q,
                               @RequestParam(required = false) String supplier,
                               @RequestParam(required = false) Lifecycle lifecycle,
@@ -78,12 +86,15 @@ class ModuleApiController {
     }
 
     @GetMapping("/{id}")
+    @Operation(operationId = "getModule", summary = "One module, with what the physics engine derives from it")
     ModuleResponse get(@PathVariable long id) {
         return ModuleResponse.of(catalog.get(id));
     }
 
     @PostMapping(consumes = MediaType.APPLICATION_JSON_VALUE)
+    @ResponseStatus(HttpStatus.CREATED) // what the ResponseEntity below answers; said here for the API document
     @PreAuthorize(WRITERS)
+    @Operation(operationId = "createModule", summary = "Add a module by its ratings or its construction")
     ResponseEntity<ModuleResponse> create(@RequestBody ModuleRequest request, Principal who) {
         ModuleSpec created = withJsonFieldNames(() -> catalog.create(request.toDefinition(), who.getName()));
         return ResponseEntity.created(URI.create("/api/v1/modules/" + created.id())).body(ModuleResponse.of(created));
@@ -91,6 +102,7 @@ class ModuleApiController {
 
     @PutMapping(path = "/{id}", consumes = MediaType.APPLICATION_JSON_VALUE)
     @PreAuthorize(WRITERS)
+    @Operation(operationId = "updateModule", summary = "Change a module; send the version you read")
     ModuleResponse update(@PathVariable long id, @RequestBody ModuleRequest request, Principal who) {
         if (request.version() == null) {
             throw new InvalidRequestException("version", "is required: send the version you read, so that a "
@@ -103,12 +115,15 @@ class ModuleApiController {
     /** Archives the module (entries are never deleted) and returns it. */
     @DeleteMapping("/{id}")
     @PreAuthorize(WRITERS)
+    @Operation(operationId = "archiveModule", summary = "Archive a module; it stays, so lists and studies "
+            + "that name it keep working")
     ModuleResponse archive(@PathVariable long id, Principal who) {
         return ModuleResponse.of(catalog.archive(id, who.getName()));
     }
 
     @PostMapping("/{id}/restore")
     @PreAuthorize(WRITERS)
+    @Operation(operationId = "restoreModule", summary = "Bring an archived module back")
     ModuleResponse restore(@PathVariable long id, Principal who) {
         return ModuleResponse.of(catalog.restore(id, who.getName()));
     }
@@ -119,6 +134,10 @@ class ModuleApiController {
      */
     @PostMapping(path = "/import", consumes = TEXT_CSV)
     @PreAuthorize(WRITERS)
+    @Operation(operationId = "importModules", summary = "Import a CSV of modules, all or nothing; dryRun=true "
+            + "only reports what would change")
+    @ApiResponse(responseCode = "200", description = "What was (or, on a dry run, would be) stored, row by row",
+            content = @Content(schema = @Schema(implementation = ImportResponse.class)))
     ResponseEntity<Object> importCsv(HttpServletRequest request, @RequestParam(defaultValue = "false") boolean dryRun,
                                      Principal who) throws IOException {
         ImportReport report;
@@ -146,6 +165,7 @@ class ModuleApiController {
     }
 
     @GetMapping(path = "/export", produces = TEXT_CSV)
+    @Operation(operationId = "exportModules", summary = "The catalog as CSV, in the columns the import reads")
     void export(@RequestParam(defaultValue = "false") boolean includeArchived, HttpServletResponse response)
             throws IOException {
         response.setContentType(TEXT_CSV + ";charset=UTF-8");
@@ -156,6 +176,7 @@ class ModuleApiController {
     }
 
     @GetMapping(path = "/template", produces = TEXT_CSV)
+    @Operation(operationId = "getModuleCsvTemplate", summary = "An empty CSV with every column the import reads")
     ResponseEntity<String> template() {
         return ResponseEntity.ok().contentType(MediaType.parseMediaType(TEXT_CSV + ";charset=UTF-8"))
                 .header("Content-Disposition", "attachment; filename=\"catalog-template.csv\"")

@@ -25,7 +25,8 @@ class GeneratorApiController {
     }
 
     @PostMapping("/operating-point")
-    @Operation(summary = "Generator point on a load, or on the load that gives the most power",
+    @Operation(operationId = "solveGeneratorPoint",
+            summary = "Generator point on a load, or on the load that gives the most power",
             description = "Sources up to 1500 °C. warnings flag a hot junction above the module's stated maximum "
                     + "temperature (HOT_SIDE_ABOVE_LIMIT), a module that states none (HOT_SIDE_LIMIT_UNCHECKED; give "
                     + "module.maxOperatingC), and an open-circuit voltage above 60 V DC (SHOCK_HAZARD_VOLTAGE).")

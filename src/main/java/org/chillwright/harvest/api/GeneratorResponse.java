@@ -1,5 +1,6 @@
 package org.chillwright.harvest.api;
 
+import jakarta.annotation.Nullable;
 import java.util.List;
 
 /**
@@ -21,7 +22,7 @@ public record GeneratorResponse(
         double maxEfficiency,
         double maxEfficiencyLoadOhm,
         double openCircuitHotJunctionC,
-        Double maxHotSideC,
+        @Nullable Double maxHotSideC,
         List<WarningJson> warnings) {
 
     /** A risk of the design: a stable code and a sentence with the numbers. */

@@ -32,7 +32,8 @@ class HarvestApiController {
     }
 
     @PostMapping("/rankings")
-    @Operation(summary = "Rank the catalog as generators between a hot source and a cold sink",
+    @Operation(operationId = "rankGenerators",
+            summary = "Rank the catalog as generators between a hot source and a cold sink",
             description = "Every module in every series x parallel split up to maxModules, each on the load that "
                     + "gives it the most power. Objectives POWER (default), EFFICIENCY, COST_PER_WATT. A design "
                     + "whose hot face would pass the module's maximum operating temperature with the load "

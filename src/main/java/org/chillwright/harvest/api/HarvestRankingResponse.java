@@ -1,5 +1,6 @@
 package org.chillwright.harvest.api;
 
+import jakarta.annotation.Nullable;
 import java.util.List;
 
 /** The ranked generator designs, the modules that cannot do the job with their reasons, and what it took. */
@@ -15,8 +16,9 @@ public record HarvestRankingResponse(List<Candidate> candidates, List<Refused> i
                             int seriesCount, int parallelCount, double openCircuitV, double loadOhm,
                             double currentA, double voltageV, double powerW, double efficiency,
                             double hotJunctionC, double coldJunctionC, double heatInW, double maxEfficiency,
-                            double maxEfficiencyLoadOhm, double openCircuitHotJunctionC, Double maxHotSideC,
-                            Double unitPrice, Double arrayCost, Double costPerW, String currency,
+                            double maxEfficiencyLoadOhm, double openCircuitHotJunctionC,
+                            @Nullable Double maxHotSideC, @Nullable Double unitPrice, @Nullable Double arrayCost,
+                            @Nullable Double costPerW, @Nullable String currency,
                             List<GeneratorResponse.WarningJson> warnings) {
     }
 

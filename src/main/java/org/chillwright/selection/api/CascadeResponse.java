@@ -1,18 +1,19 @@
 package org.chillwright.selection.api;
 
+import jakarta.annotation.Nullable;
 import java.util.List;
 
 /** A two-stage cascade's point; figures are null when it is infeasible. */
 public record CascadeResponse(
         boolean feasible,
-        OperatingPointResponse.ReasonJson reason,
-        Double interstageC,
-        Double heatLoadW,
-        Double currentA,
+        @Nullable OperatingPointResponse.ReasonJson reason,
+        @Nullable Double interstageC,
+        @Nullable Double heatLoadW,
+        @Nullable Double currentA,
         List<Double> stageCurrentsA,
-        Double powerW,
-        Double cop,
-        Double coldStageCop,
-        Double hotStageCop,
-        Double heatRejectedW) {
+        @Nullable Double powerW,
+        @Nullable Double cop,
+        @Nullable Double coldStageCop,
+        @Nullable Double hotStageCop,
+        @Nullable Double heatRejectedW) {
 }

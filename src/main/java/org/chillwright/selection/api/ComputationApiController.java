@@ -53,7 +53,7 @@ class ComputationApiController {
     }
 
     @PostMapping("/operating-point")
-    @Operation(summary = "Solve one module or array against one cooling case",
+    @Operation(operationId = "solveOperatingPoint", summary = "Solve one module or array against one cooling case",
             description = "Without currentA or voltageV: the current that removes heatLoadW at setPointC (lower root). "
                     + "With one of them: the object temperature reached at that drive.")
     OperatingPointResponse operatingPoint(@Valid @RequestBody OperatingPointRequest request) {
@@ -82,7 +82,8 @@ class ComputationApiController {
     }
 
     @PostMapping("/derive")
-    @Operation(summary = "Lumped parameters S, R, K and Z of a module, and its ideal ratings at a hot side",
+    @Operation(operationId = "deriveModule",
+            summary = "Lumped parameters S, R, K and Z of a module, and its ideal ratings at a hot side",
             description = "atHotSideC defaults to the rating temperature, or 25 °C for a module without ratings.")
     DeriveResponse derive(@Valid @RequestBody DeriveRequest request) {
         var module = modules.resolve(request.module(), "module");
@@ -103,7 +104,7 @@ class ComputationApiController {
     }
 
     @PostMapping("/cascade/operating-point")
-    @Operation(summary = "Two-stage cascade between fixed cold and hot faces",
+    @Operation(operationId = "solveCascade", summary = "Two-stage cascade between fixed cold and hot faces",
             description = "Give coldStageCurrentA and hotStageCurrentA, or heatLoadW to solve one shared current.")
     CascadeResponse cascade(@Valid @RequestBody CascadeRequest request) {
         boolean currents = request.coldStageCurrentA() != null || request.hotStageCurrentA() != null;
@@ -135,7 +136,7 @@ class ComputationApiController {
     }
 
     @PostMapping("/cooldown")
-    @Operation(summary = "Cool-down of a lumped object at constant current and hot side",
+    @Operation(operationId = "coolDown", summary = "Cool-down of a lumped object at constant current and hot side",
             description = "Closed-form exponential (lumped capacitance); timeToTargetS when targetC is given.")
     CooldownResponse cooldown(@Valid @RequestBody CooldownRequest request) {
         var module = modules.resolve(request.module(), "module");
@@ -159,7 +160,8 @@ class ComputationApiController {
     }
 
     @GetMapping("/dew-point")
-    @Operation(summary = "Dew point of air, and its frost point when the dew point is below 0 °C",
+    @Operation(operationId = "dewPoint",
+            summary = "Dew point of air, and its frost point when the dew point is below 0 °C",
             description = "Magnus form over water and over ice (Alduchov and Eskridge 1996); relative humidity with "
                     + "respect to water. Fitted for air from -40 to 50 °C; from -100 to 200 °C the values are "
                     + "extrapolated and the answer says so (above 50 °C the extrapolated dew point errs high).")

@@ -1,5 +1,6 @@
 package org.chillwright.selection.api;
 
+import jakarta.annotation.Nullable;
 import java.util.List;
 
 /**
@@ -7,7 +8,7 @@ import java.util.List;
  *
  * @param timeToTargetS null when no target was given or it is never reached
  */
-public record CooldownResponse(double temperatureC, double finalC, double timeConstantS, Double timeToTargetS,
+public record CooldownResponse(double temperatureC, double finalC, double timeConstantS, @Nullable Double timeToTargetS,
                                List<Sample> curve) {
 
     /** One point of the cool-down curve. */

@@ -1,5 +1,7 @@
 package org.chillwright.selection.api;
 
+import jakarta.annotation.Nullable;
+
 /**
  * Lumped parameters of a module and its ideal ratings at a hot-side temperature.
  *
@@ -14,7 +16,7 @@ public record DeriveResponse(
         double figureOfMeritPerK,
         double figureOfMeritAt300K,
         double impliedQmaxW,
-        Double ratingsConsistency,
+        @Nullable Double ratingsConsistency,
         Ratings ratingsAt) {
 
     /** Ideal maximum ratings at {@code hotSideC}. */

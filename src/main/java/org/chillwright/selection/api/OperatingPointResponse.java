@@ -1,5 +1,6 @@
 package org.chillwright.selection.api;
 
+import jakarta.annotation.Nullable;
 import java.util.List;
 
 /**
@@ -8,27 +9,27 @@ import java.util.List;
  */
 public record OperatingPointResponse(
         boolean feasible,
-        ReasonJson reason,
-        Double currentA,
-        Double voltageV,
-        Double powerW,
-        Double cop,
-        Double setPointC,
-        Double coldSideC,
-        Double hotSideC,
-        Double heatLoadW,
-        Double heatRejectedW,
-        Double fractionOfImax,
-        Double maxHeatLoadW,
-        Double currentAtMaxHeatLoadA,
-        Double loadMarginPct,
-        Double marginK,
-        Double copOptimalCurrentA,
-        Double maxCop,
-        Double dewPointC,
-        Double frostPointC,
+        @Nullable ReasonJson reason,
+        @Nullable Double currentA,
+        @Nullable Double voltageV,
+        @Nullable Double powerW,
+        @Nullable Double cop,
+        @Nullable Double setPointC,
+        @Nullable Double coldSideC,
+        @Nullable Double hotSideC,
+        @Nullable Double heatLoadW,
+        @Nullable Double heatRejectedW,
+        @Nullable Double fractionOfImax,
+        @Nullable Double maxHeatLoadW,
+        @Nullable Double currentAtMaxHeatLoadA,
+        @Nullable Double loadMarginPct,
+        @Nullable Double marginK,
+        @Nullable Double copOptimalCurrentA,
+        @Nullable Double maxCop,
+        @Nullable Double dewPointC,
+        @Nullable Double frostPointC,
         List<WarningJson> warnings,
-        PerModule perModule,
+        @Nullable PerModule perModule,
         int seriesCount,
         int parallelCount) {
 

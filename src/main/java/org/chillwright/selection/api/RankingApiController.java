@@ -13,9 +13,12 @@ import org.chillwright.physics.CoolingCase;
 import org.chillwright.physics.Units;
 import org.chillwright.selection.CaseSpec;
 import org.chillwright.selection.Objective;
+import org.chillwright.selection.RankingCsv;
 import org.chillwright.selection.RankingCase;
 import org.chillwright.selection.SelectionService;
 import org.chillwright.web.InvalidRequestException;
+import org.springframework.http.MediaType;
+import org.springframework.http.ResponseEntity;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RequestMapping;
@@ -28,6 +31,7 @@ class RankingApiController {
 
     static final int DEFAULT_MAX_MODULES = 4;
     static final int DEFAULT_LIMIT = 50;
+    private static final String TEXT_CSV = "text/csv";
 
     private final SelectionService selection;
 
@@ -35,10 +39,12 @@ class RankingApiController {
         this.selection = selection;
     }
 
-    @PostMapping
-    @Operation(summary = "Rank the catalog against a cooling case",
+    @PostMapping(produces = MediaType.APPLICATION_JSON_VALUE)
+    @Operation(operationId = "rankCoolers", summary = "Rank the catalog against a cooling case",
             description = "Objectives COP (default), POWER, MARGIN, COST. Obsolete modules are left out unless "
-                    + "lifecycles asks for them. elapsedMs is the server time spent ranking.")
+                    + "lifecycles asks for them. elapsedMs is the server time spent ranking. With Accept: text/csv "
+                    + "the same ranking comes as one CSV table (the designs in rank order, then the modules that "
+                    + "cannot do the job with their reason), for a spreadsheet or a shell script.")
     RankingResponse rank(@Valid @RequestBody RankingRequest request) {
         var result = selection.rank(spec(request));
         var candidates = result.candidates().stream().map(row -> {
@@ -53,6 +59,14 @@ class RankingApiController {
                 r.parallelCount(), number(r.maxHeatLoadW()), number(r.currentAtMaxHeatLoadA()))).toList();
         return new RankingResponse(candidates, refused, result.feasible(), result.evaluated(), result.elapsedMs(),
                 result.catalogRevision());
+    }
+
+    /** The same ranking as a CSV table, for spreadsheets and shell scripts. */
+    @PostMapping(produces = TEXT_CSV)
+    @Operation(operationId = "rankCoolers", summary = "Rank the catalog against a cooling case")
+    ResponseEntity<String> rankAsCsv(@Valid @RequestBody RankingRequest request) {
+        return ResponseEntity.ok().contentType(MediaType.parseMediaType(TEXT_CSV + ";charset=UTF-8"))
+                .body(RankingCsv.of(selection.rank(spec(request))));
     }
 
     private static RankingResponse.Heating heating(org.chillwright.physics.HeatingCheck.Result h) {

@@ -1,6 +1,7 @@
 package org.chillwright.selection.api;
 
 import com.fasterxml.jackson.annotation.JsonUnwrapped;
+import jakarta.annotation.Nullable;
 import java.util.List;
 
 /** The ranked designs, the modules that cannot do the job with their reasons, and what it took. */
@@ -9,8 +10,9 @@ public record RankingResponse(List<Candidate> candidates, List<Refused> infeasib
 
     /** One design with its operating point fields alongside (currentA, cop, hotSideC, ...). */
     public record Candidate(int rank, long moduleId, String partNumber, String supplier, String lifecycle,
-                            Double unitPrice, Double arrayCost, String currency, boolean paretoFront,
-                            Double requiredSinkKPerW, Heating heating, @JsonUnwrapped OperatingPointResponse point) {
+                            @Nullable Double unitPrice, @Nullable Double arrayCost, @Nullable String currency,
+                            boolean paretoFront, @Nullable Double requiredSinkKPerW, @Nullable Heating heating,
+                            @JsonUnwrapped OperatingPointResponse point) {
     }
 
     /**
@@ -18,8 +20,9 @@ public record RankingResponse(List<Candidate> candidates, List<Refused> infeasib
      *
      * @param heatNeededW heat the object must get from the module, W (negative: it still runs warm)
      */
-    public record Heating(boolean needsHeating, boolean reachable, boolean withinLimits, Double currentA,
-                          Double voltageV, Double powerW, Double copHeating, double heatNeededW) {
+    public record Heating(boolean needsHeating, boolean reachable, boolean withinLimits,
+                          @Nullable Double currentA, @Nullable Double voltageV, @Nullable Double powerW,
+                          @Nullable Double copHeating, double heatNeededW) {
     }
 
     /**
@@ -28,6 +31,7 @@ public record RankingResponse(List<Candidate> candidates, List<Refused> infeasib
      * far off it is.
      */
     public record Refused(long moduleId, String partNumber, String supplier, OperatingPointResponse.ReasonJson reason,
-                          int seriesCount, int parallelCount, Double maxHeatLoadW, Double currentAtMaxHeatLoadA) {
+                          int seriesCount, int parallelCount, @Nullable Double maxHeatLoadW,
+                          @Nullable Double currentAtMaxHeatLoadA) {
     }
 }

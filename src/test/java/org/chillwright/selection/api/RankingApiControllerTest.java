@@ -1,5 +1,6 @@
 package org.chillwright.selection.api;
 
+import static org.assertj.core.api.Assertions.assertThat;
 import static org.hamcrest.Matchers.closeTo;
 import static org.hamcrest.Matchers.hasItem;
 import static org.hamcrest.Matchers.not;
@@ -7,6 +8,7 @@ import static org.springframework.test.web.servlet.request.MockMvcRequestBuilder
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
+import java.nio.charset.StandardCharsets;
 import org.chillwright.approval.Actor;
 import org.chillwright.approval.ApprovedListService;
 import org.chillwright.approval.EntryState;
@@ -141,5 +143,24 @@ class RankingApiControllerTest {
     void badRankingRequestIsA400NamingTheField(String what, String json, String field) throws Exception {
         rank(json).andExpect(status().isBadRequest())
                 .andExpect(jsonPath("$.errors[?(@.field=='" + field + "')]").exists());
+    }
+
+    @Test
+    void withAcceptTextCsvTheRankingIsOneCsvTableInRankOrder() throws Exception {
+        var response = mvc.perform(post("/api/v1/rankings").contentType(MediaType.APPLICATION_JSON).accept("text/csv")
+                .content("{" + S10 + ",\"maxModules\":1,\"supplier\":\"" + TestCatalog.SUPPLIER_A + "\"}"))
+                .andReturn().getResponse();
+        assertThat(response.getStatus()).isEqualTo(200);
+        assertThat(response.getContentType()).startsWith("text/csv");
+        var lines = response.getContentAsString(StandardCharsets.UTF_8).lines().toList();
+        assertThat(lines.get(0)).startsWith("rank,feasible,moduleId,supplier,partNumber,");
+        assertThat(lines.get(1)).startsWith("1,true,").contains(",TMA-1,");
+    }
+
+    @Test
+    void withoutAnAcceptHeaderTheRankingIsJson() throws Exception {
+        var response = rank("{" + S10 + ",\"maxModules\":1}").andReturn().getResponse();
+        assertThat(response.getStatus()).isEqualTo(200);
+        assertThat(response.getContentType()).startsWith("application/json");
     }
 }
